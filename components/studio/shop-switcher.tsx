@@ -1,0 +1,48 @@
+"use client";
+
+import { useRouter } from "next/navigation";
+import { useId } from "react";
+import { errorMessage } from "@/lib/client/api-fetch";
+import { ROLE_LABELS, type MeResponse } from "@/lib/client/api-types";
+import { useSwitchShop } from "@/lib/client/use-me";
+import { useToast } from "@/components/toast/toast-provider";
+
+/** A select of the user's shops; switching reloads the studio for the new shop. */
+export function ShopSwitcher({ me }: { me: MeResponse }) {
+  const id = useId();
+  const router = useRouter();
+  const toast = useToast();
+  const switchShop = useSwitchShop();
+
+  return (
+    <div className="flex items-center gap-2">
+      <label htmlFor={id} className="sr-only">
+        Active shop
+      </label>
+      <select
+        id={id}
+        value={String(me.shop.id)}
+        disabled={switchShop.isPending}
+        onChange={(e) => {
+          const shopId = e.target.value;
+          const target = me.shops.find((s) => String(s.id) === shopId);
+          switchShop.mutate(shopId, {
+            onSuccess: () => {
+              toast.success(`Switched to ${target?.name ?? "the shop"}.`);
+              router.push("/projects");
+              router.refresh();
+            },
+            onError: (err) => toast.error(errorMessage(err)),
+          });
+        }}
+        className="max-w-56 border border-foam-600 bg-foam-800 px-2 py-1 text-sm text-white focus:outline-2 focus:outline-foam-400"
+      >
+        {me.shops.map((s) => (
+          <option key={s.id} value={String(s.id)}>
+            {s.name} ({ROLE_LABELS[s.role] ?? s.role})
+          </option>
+        ))}
+      </select>
+    </div>
+  );
+}
