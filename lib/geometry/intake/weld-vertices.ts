@@ -1,0 +1,120 @@
+/**
+ * Welding: vertices closer than a tolerance become one vertex, the earliest in input order.
+ *
+ * Spatial hashing on a grid of cubic cells of edge CELL_FACTOR·tolerance, stored in an open-addressing hash table
+ * (linear probing) keyed by integer cell coordinates. A point is compared only with representatives in its own cell
+ * and in neighbouring cells it lies within `tolerance` of, so the cost is O(n) expected, never O(n²).
+ * The merge is greedy against representatives (a point joins the earliest representative within tolerance), which
+ * makes the result deterministic and independent of hash layout.
+ */
+
+/**
+ * Weld tolerance as a fraction of the bounding-box diagonal: 1e-6 (0.1 µm on a 100 mm sculpt). Float32 STL
+ * coordinates carry a relative rounding error of 2^-24 ≈ 6e-8 (Source: IEEE 754 binary32, 24-bit significand), so
+ * copies of one vertex written by different code paths agree to well within it, while the finest detail a scan of a
+ * sculpt resolves (≈ 1e-4 of its size) stays two orders of magnitude above it. Relative, so welding does not change
+ * when a mesh is scaled or moved.
+ */
+export const WELD_TOLERANCE_FACTOR = 1e-6;
+
+/** Cell edge in tolerances: large enough that most points need one cell, small enough that cells hold few points. */
+const CELL_FACTOR = 16;
+
+export interface WeldResult {
+  /** #points: index of the representative (earliest point within tolerance; itself for a representative). */
+  representative: Uint32Array;
+  /** points merged into an earlier one */
+  welded: number;
+}
+
+/**
+ * @param positions  #points×3 coordinates (any length unit)
+ * @param active     optional #points flags; inactive points are neither merged nor merged into (they map to themselves)
+ * @param tolerance  merge distance, same unit as positions; 0 merges only identical positions
+ */
+export function weldVertices(positions: Float64Array, active: Uint8Array | null, tolerance: number): WeldResult {
+  const count = positions.length / 3;
+  const representative = new Uint32Array(count);
+  let minX = Infinity, minY = Infinity, minZ = Infinity;
+  let activeCount = 0;
+  for (let p = 0; p < count; p++) {
+    representative[p] = p;
+    if (active !== null && active[p] === 0) continue;
+    activeCount++;
+    const x = positions[3 * p], y = positions[3 * p + 1], z = positions[3 * p + 2];
+    if (x < minX) minX = x;
+    if (y < minY) minY = y;
+    if (z < minZ) minZ = z;
+  }
+  if (activeCount === 0) return { representative, welded: 0 };
+
+  // Zero tolerance still needs a finite cell; any positive size works because only identical points then merge.
+  const tol = tolerance > 0 ? tolerance : 0;
+  let cell = tol * CELL_FACTOR;
+  if (!(cell > 0)) cell = 1;
+  const inv = 1 / cell;
+  const reach = tol * inv; // tolerance as a fraction of a cell
+  const tol2 = tol * tol;
+
+  let size = 1;
+  while (size < activeCount * 2) size <<= 1;
+  const mask = size - 1;
+  const keyX = new Int32Array(size);
+  const keyY = new Int32Array(size);
+  const keyZ = new Int32Array(size);
+  const head = new Int32Array(size).fill(-1);
+  const next = new Int32Array(count);
+  let welded = 0;
+
+  for (let p = 0; p < count; p++) {
+    if (active !== null && active[p] === 0) continue;
+    const x = positions[3 * p], y = positions[3 * p + 1], z = positions[3 * p + 2];
+    const fx = (x - minX) * inv, fy = (y - minY) * inv, fz = (z - minZ) * inv;
+    const cx = Math.floor(fx), cy = Math.floor(fy), cz = Math.floor(fz);
+    const rx = fx - cx, ry = fy - cy, rz = fz - cz;
+    // Neighbour cells to visit on each axis: −1, 0 or +1 beside the own cell.
+    const ox = rx < reach ? -1 : rx > 1 - reach ? 1 : 0;
+    const oy = ry < reach ? -1 : ry > 1 - reach ? 1 : 0;
+    const oz = rz < reach ? -1 : rz > 1 - reach ? 1 : 0;
+    let best = -1;
+    for (let a = 0; a <= (ox !== 0 ? 1 : 0); a++) {
+      const qx = cx + a * ox;
+      for (let b = 0; b <= (oy !== 0 ? 1 : 0); b++) {
+        const qy = cy + b * oy;
+        for (let c = 0; c <= (oz !== 0 ? 1 : 0); c++) {
+          const qz = cz + c * oz;
+          let s = hash(qx, qy, qz) & mask;
+          while (head[s] !== -1 && (keyX[s] !== qx || keyY[s] !== qy || keyZ[s] !== qz)) s = (s + 1) & mask;
+          for (let r = head[s]; r !== -1; r = next[r]) {
+            if (best !== -1 && r > best) continue;
+            const dx = positions[3 * r] - x, dy = positions[3 * r + 1] - y, dz = positions[3 * r + 2] - z;
+            if (dx * dx + dy * dy + dz * dz <= tol2) best = r;
+          }
+        }
+      }
+    }
+    if (best !== -1) {
+      representative[p] = best;
+      welded++;
+      continue;
+    }
+    let s = hash(cx, cy, cz) & mask;
+    while (head[s] !== -1 && (keyX[s] !== cx || keyY[s] !== cy || keyZ[s] !== cz)) s = (s + 1) & mask;
+    if (head[s] === -1) {
+      keyX[s] = cx;
+      keyY[s] = cy;
+      keyZ[s] = cz;
+    }
+    next[p] = head[s];
+    head[s] = p;
+  }
+  return { representative, welded };
+}
+
+function hash(x: number, y: number, z: number): number {
+  let h = Math.imul(x, 0x8da6b343) ^ Math.imul(y, 0xd8163841) ^ Math.imul(z, 0xcb1ab31f);
+  h ^= h >>> 15;
+  h = Math.imul(h, 0x2c1b3c6d);
+  h ^= h >>> 12;
+  return h >>> 0;
+}
