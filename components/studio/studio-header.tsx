@@ -3,15 +3,15 @@
 import Link from "next/link";
 import { usePathname } from "next/navigation";
 import { PeelMark } from "@/components/brand/wordmark";
-import { ROLE_LABELS } from "@/lib/client/api-types";
+import { ROLE_LABELS, type MeResponse } from "@/lib/client/api-types";
 import { useMe } from "@/lib/client/use-me";
 import { can } from "@/lib/permissions/permissions";
 import { ShopSwitcher } from "./shop-switcher";
 import { SignOutButton } from "./sign-out-button";
 
 /** Top bar of the studio: mark, sections the role may open, the active shop and role, shop switcher, sign-out. */
-export function StudioHeader() {
-  const me = useMe();
+export function StudioHeader({ initialMe }: { initialMe?: MeResponse }) {
+  const me = useMe(initialMe);
   const pathname = usePathname();
   const role = me.data?.role;
 
@@ -57,11 +57,7 @@ export function StudioHeader() {
               </div>
               {me.data.shops.length > 1 ? <ShopSwitcher me={me.data} /> : null}
             </>
-          ) : me.isError ? (
-            <span className="text-xs text-kraft-200">Could not load your shop.</span>
-          ) : (
-            <span className="h-8 w-40 animate-pulse bg-foam-600" aria-hidden="true" />
-          )}
+          ) : null}
           <SignOutButton />
         </div>
       </div>

@@ -1,9 +1,10 @@
-import type { ButtonHTMLAttributes } from "react";
+import type { ButtonHTMLAttributes, Ref } from "react";
 import { buttonClass, type ButtonVariant } from "./button-styles";
 
 interface ButtonProps extends ButtonHTMLAttributes<HTMLButtonElement> {
   variant?: ButtonVariant;
   busy?: boolean;
+  ref?: Ref<HTMLButtonElement>;
 }
 
 /** A button; `busy` disables it and tells assistive tech that work is in progress. */

@@ -6,8 +6,13 @@ import type { MeResponse } from "./api-types";
 import { queryKeys } from "./query-keys";
 
 /** The signed-in user, active shop, role and permissions (GET /api/me). */
-export function useMe() {
-  return useQuery({ queryKey: queryKeys.me, queryFn: ({ signal }) => apiFetch<MeResponse>("/api/me", { signal }) });
+export function useMe(initial?: MeResponse) {
+  return useQuery({
+    queryKey: queryKeys.me,
+    queryFn: ({ signal }) => apiFetch<MeResponse>("/api/me", { signal }),
+    initialData: initial,
+    enabled: initial !== undefined,
+  });
 }
 
 /** Switch the active shop (POST /api/me/shop); every cached query belongs to the old shop, so all are dropped. */
