@@ -1,0 +1,21 @@
+// Minimal types for s3rver 3.7 (the package ships none): only what scripts/stack/s3-fake.ts uses.
+declare module "s3rver" {
+  import type { Server } from "node:http";
+  import type { AddressInfo } from "node:net";
+  interface S3rverOptions {
+    address?: string;
+    port?: number;
+    silent?: boolean;
+    directory?: string;
+    resetOnClose?: boolean;
+    allowMismatchedSignatures?: boolean;
+    vhostBuckets?: boolean;
+    configureBuckets?: { name: string; configs?: (string | Buffer)[] }[];
+  }
+  export default class S3rver {
+    constructor(options?: S3rverOptions);
+    httpServer?: Server;
+    run(): Promise<AddressInfo>;
+    close(): Promise<void>;
+  }
+}
