@@ -12,7 +12,17 @@ export function MembersBoard({ canInvite, canManage, currentUserId }: { canInvit
   const query = useMembers();
 
   return (
-    <div className="grid gap-6 lg:grid-cols-[2fr_1fr]">
+    <div className="flex flex-col gap-6">
+      {canInvite ? (
+        <div className="grid gap-6 md:grid-cols-2">
+          <Panel title="Invite someone">
+            <InviteForm />
+          </Panel>
+          <Panel title="Open invitations">
+            {query.data ? <InvitationsList invitations={query.data.invitations} /> : <p className="text-sm text-kraft-700">…</p>}
+          </Panel>
+        </div>
+      ) : null}
       <Panel title="People in this shop">
         {query.isPending ? (
           <p role="status" className="text-sm text-kraft-700">Loading members…</p>
@@ -22,16 +32,6 @@ export function MembersBoard({ canInvite, canManage, currentUserId }: { canInvit
           <MembersTable members={query.data.members} canManage={canManage} currentUserId={currentUserId} />
         )}
       </Panel>
-      {canInvite ? (
-        <div className="flex flex-col gap-6">
-          <Panel title="Invite someone">
-            <InviteForm />
-          </Panel>
-          <Panel title="Open invitations">
-            {query.data ? <InvitationsList invitations={query.data.invitations} /> : <p className="text-sm text-kraft-700">…</p>}
-          </Panel>
-        </div>
-      ) : null}
     </div>
   );
 }

@@ -45,11 +45,11 @@ function MemberRow({ member, canManage, isSelf }: { member: Member; canManage: b
 
   return (
     <tr className="border-b border-kraft-100 last:border-0" data-member-email={member.email}>
-      <th scope="row" className="px-5 py-3 text-left font-medium">
+      <th scope="row" className="px-5 py-3 text-left font-medium whitespace-nowrap">
         {member.name}
         {isSelf ? <span className="ml-2 border border-kraft-500 px-1 text-xs font-normal text-kraft-700">you</span> : null}
       </th>
-      <td className="px-3 py-3 break-all text-kraft-700">{member.email}</td>
+      <td className="px-3 py-3 whitespace-nowrap text-kraft-700">{member.email}</td>
       <td className="px-3 py-3">
         {canManage ? (
           <>
