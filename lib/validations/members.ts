@@ -24,3 +24,6 @@ export const invitationAcceptSchema = z.strictObject({
   password: currentPasswordField,
 });
 export type InvitationAcceptInput = z.infer<typeof invitationAcceptSchema>;
+
+/** Route params of /api/shop/invitations/[id] */
+export const invitationParamsSchema = z.object({ id: uuidField("Invitation") });
