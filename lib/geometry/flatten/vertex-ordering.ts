@@ -4,9 +4,10 @@ import { nestedDissection } from "../sparse/nested-dissection";
  * Nested-dissection order of the vertices of a triangle mesh (graph = mesh edges). Used to order the unknowns of
  * the LSCM and ARAP systems, whose sparsity follows the mesh.
  *
+ * @param positions optional #V×3 coordinates for geometric separators (see nestedDissection)
  * @returns perm[new] = old vertex
  */
-export function meshVertexOrdering(vertexCount: number, triangles: Uint32Array): Uint32Array {
+export function meshVertexOrdering(vertexCount: number, triangles: Uint32Array, positions?: Float64Array): Uint32Array {
   const nf = triangles.length / 3;
   const deg = new Uint32Array(vertexCount + 1);
   for (let f = 0; f < nf; f++) {
@@ -23,5 +24,5 @@ export function meshVertexOrdering(vertexCount: number, triangles: Uint32Array):
     }
   }
   // duplicates (each interior edge appears twice) are harmless for the BFS; keep them
-  return nestedDissection(vertexCount, deg, raw);
+  return nestedDissection(vertexCount, deg, raw, positions);
 }

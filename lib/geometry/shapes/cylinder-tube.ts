@@ -1,4 +1,5 @@
 import type { TriMesh } from "../mesh";
+import { requirePositive } from "./check-params";
 import { frustumLateral } from "./frustum-lateral";
 
 export interface CylinderTubeOptions {
@@ -18,5 +19,6 @@ export interface CylinderTubeOptions {
  * pattern is a rectangle N·2r·sin(π/N) wide and `height` tall.
  */
 export function cylinderTube(opts: CylinderTubeOptions): TriMesh {
+  requirePositive("radius", opts.radius);
   return frustumLateral({ r1: opts.radius, r2: opts.radius, height: opts.height, segments: opts.segments, bands: opts.bands });
 }

@@ -8,9 +8,12 @@
  * @param n number of graph vertices
  * @param ptr n+1 adjacency offsets (CSR; self loops are ignored)
  * @param adj neighbour indices
+ * @param coords optional #n×3 vertex coordinates: each level also tries a coordinate bisection (median plane
+ *   across the longest bounding-box axis; separator = the far-side vertices touching the near side) and keeps the
+ *   smaller of the two separators (geometric nested dissection, Miller, Teng, Thurston & Vavasis 1998)
  * @returns perm with perm[newIndex] = oldIndex
  */
-export function nestedDissection(n: number, ptr: Uint32Array, adj: Uint32Array): Uint32Array {
+export function nestedDissection(n: number, ptr: Uint32Array, adj: Uint32Array, coords?: Float64Array): Uint32Array {
   const LEAF = 48;
   const perm = new Uint32Array(n);
   let out = 0;
@@ -96,10 +99,50 @@ export function nestedDissection(n: number, ptr: Uint32Array, adj: Uint32Array):
         if (touchesFar) s.push(v); else a.push(v);
       }
     }
+    if (coords) {
+      const g = coordinateSplit(verts, t);
+      if (g && g.s.length < s.length) {
+        for (let i = 0; i < m; i++) tag[verts[i]] = -1;
+        dissect(g.a);
+        dissect(g.b);
+        for (let i = 0; i < g.s.length; i++) perm[out++] = g.s[i];
+        return;
+      }
+    }
     for (let i = 0; i < m; i++) tag[verts[i]] = -1;
     dissect(Int32Array.from(a));
     dissect(Int32Array.from(b));
     for (const v of s) perm[out++] = v;
+  };
+
+  const keys = new Float64Array(n);
+  /** median-plane split of the set tagged t (all members currently carry tag t) */
+  const coordinateSplit = (verts: Int32Array, t: number): { a: Int32Array; b: Int32Array; s: Int32Array } | null => {
+    const c = coords!;
+    const m = verts.length;
+    let best = 0, bestExtent = -1;
+    for (let ax = 0; ax < 3; ax++) {
+      let lo = Infinity, hi = -Infinity;
+      for (let i = 0; i < m; i++) { const x = c[3 * verts[i] + ax]; if (x < lo) lo = x; if (x > hi) hi = x; }
+      if (hi - lo > bestExtent) { bestExtent = hi - lo; best = ax; }
+    }
+    if (!(bestExtent > 0)) return null;
+    for (let i = 0; i < m; i++) keys[i] = c[3 * verts[i] + best];
+    const sorted = keys.subarray(0, m).slice().sort();
+    const median = sorted[m >> 1];
+    const far = -4 - 4 * n - t; // temporary marker for the far side
+    for (let i = 0; i < m; i++) if (keys[i] >= median) tag[verts[i]] = far;
+    const a: number[] = [], b: number[] = [], s: number[] = [];
+    for (let i = 0; i < m; i++) {
+      const v = verts[i];
+      if (keys[i] < median) { a.push(v); continue; }
+      let touches = false;
+      for (let p = ptr[v]; p < ptr[v + 1]; p++) if (tag[adj[p]] === t) { touches = true; break; }
+      if (touches) s.push(v); else b.push(v);
+    }
+    for (let i = 0; i < m; i++) tag[verts[i]] = t;
+    if (a.length === 0 || b.length === 0) return null;
+    return { a: Int32Array.from(a), b: Int32Array.from(b), s: Int32Array.from(s) };
   };
 
   const all = new Int32Array(n);
