@@ -56,8 +56,8 @@ export interface SeamMarksInput {
   lengthFactor: number;
   /** tick spacing, output units */
   tickSpacing: number;
-  /** distance of the neighbour letter from the seam, output units */
-  letterInset: number;
+  /** distance of the neighbour letter from the seam, output units (one value, or one per piece) */
+  letterInset: number | Float64Array;
   /** |bevel| below which a seam is straight, degrees */
   straightThresholdDeg?: number;
 }
@@ -126,10 +126,11 @@ export function seamMarks(inp: SeamMarksInput): SeamMarks {
       const mid = at(length / 2);
       const [mx, my] = inward(mid.tx, mid.ty);
       // Baseline so that the letters' top (baseline turned +90°) points outward, to the seam.
+      const inset = typeof inp.letterInset === "number" ? inp.letterInset : inp.letterInset[pi];
       const letter: NeighborLetter = {
         text: neighbor,
-        x: mid.x + inp.letterInset * mx,
-        y: mid.y + inp.letterInset * my,
+        x: mid.x + inset * mx,
+        y: mid.y + inset * my,
         dx: -my,
         dy: mx,
       };
