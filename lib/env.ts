@@ -101,3 +101,8 @@ export function getEnv(): Env {
   cached ??= parseEnv(process.env);
   return cached;
 }
+
+/** Forgets the cached values, so the next getEnv() reads process.env again (tests that change process.env). */
+export function clearEnvCache(): void {
+  cached = undefined;
+}
