@@ -15,6 +15,9 @@
 import { GeometryError } from "../errors";
 import { binaryStlSize, STL_FACET_BYTES, STL_HEADER_BYTES, STL_PREAMBLE_BYTES } from "./parse-stl-binary";
 
+/** How much of the file is checked for being text. */
+const TEXT_PROBE_BYTES = 1 << 16;
+
 export type MeshFormat = "obj" | "stl-ascii" | "stl-binary";
 
 export function detectFormat(bytes: Uint8Array): MeshFormat {
@@ -35,13 +38,17 @@ export function detectFormat(bytes: Uint8Array): MeshFormat {
     if (binaryStlSize(count) === n && !(firstNonText < 0 && startsWithSolid)) return "stl-binary";
   }
   if (firstNonText < 0) return startsWithSolid ? "stl-ascii" : "obj";
-  if (n >= STL_PREAMBLE_BYTES && firstNonText < STL_HEADER_BYTES + 4 + STL_FACET_BYTES * 4 && plausibleFacets(bytes)) {
-    return "stl-binary";
-  }
+  // A text header followed by binary bytes is a binary STL torn before or in its facet count.
+  if (n < STL_PREAMBLE_BYTES && firstNonText >= STL_HEADER_BYTES) return "stl-binary";
+  if (n >= STL_PREAMBLE_BYTES && plausibleFacets(bytes)) return "stl-binary";
   const b = bytes[firstNonText];
+  const sizeNote =
+    n < STL_PREAMBLE_BYTES
+      ? `at ${n} bytes it is too short for a binary STL (at least 84)`
+      : `its first facets do not hold coordinates, so it is not a binary STL (84 + 50 bytes per facet) either`;
   throw new GeometryError(
     "UNKNOWN_FORMAT",
-    `The file is neither OBJ nor STL: byte offset ${firstNonText} holds 0x${b.toString(16).padStart(2, "0")}, which is not text, and the ${n}-byte size does not fit a binary STL (84 + 50 bytes per facet).`,
+    `The file is neither OBJ nor STL: byte offset ${firstNonText} holds 0x${b.toString(16).padStart(2, "0")}, which is not text, and ${sizeNote}.`,
     { byteOffset: firstNonText },
   );
 }
@@ -50,9 +57,14 @@ function isBlank(c: number): boolean {
   return c === 32 || c === 9 || c === 10 || c === 13 || c === 11 || c === 12;
 }
 
-/** Index of the first byte that cannot appear in a text mesh file (control bytes other than blanks), or −1. */
+/**
+ * Index of the first byte that cannot appear in a text mesh file (control bytes other than blanks) within the first
+ * TEXT_PROBE_BYTES, or −1. Binary STL shows such bytes within its first facets; the text readers report any later
+ * stray byte themselves, with its line.
+ */
 function findNonText(bytes: Uint8Array): number {
-  for (let k = 0; k < bytes.length; k++) {
+  const end = Math.min(bytes.length, TEXT_PROBE_BYTES);
+  for (let k = 0; k < end; k++) {
     const c = bytes[k];
     if (c < 32 && c !== 9 && c !== 10 && c !== 13 && c !== 11 && c !== 12) return k;
     if (c === 127) return k;

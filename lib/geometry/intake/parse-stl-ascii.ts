@@ -66,9 +66,15 @@ export function parseAsciiStl(bytes: Uint8Array): AsciiStlParseResult {
       { line },
     );
   };
+  /** A wrong word that runs into the end of the file is a cut-off file, not a typo. */
+  const unexpected = (expected: string, message: string): never => {
+    if (tokenEnd === n) truncated(expected);
+    throw new GeometryError("PARSE_ERROR", message, { line });
+  };
   const expect = (word: string, context: string): void => {
     if (!next()) truncated(`'${word}'`);
     if (!is(word)) {
+      if (tokenEnd === n) truncated(`'${word}'`);
       throw new GeometryError(
         "PARSE_ERROR",
         `ASCII STL line ${line}: expected '${word}' ${context} but found "${wordAt(bytes, tokenStart, n)}".`,
@@ -92,10 +98,10 @@ export function parseAsciiStl(bytes: Uint8Array): AsciiStlParseResult {
         skipRestOfLine();
         continue;
       }
-      throw new GeometryError("PARSE_ERROR", `ASCII STL line ${line}: expected the end of the file or another 'solid' after 'endsolid' but found "${wordAt(bytes, tokenStart, n)}".`, { line });
+      unexpected("'solid'", `ASCII STL line ${line}: expected the end of the file or another 'solid' after 'endsolid' but found "${wordAt(bytes, tokenStart, n)}".`);
     }
     if (!is("facet")) {
-      throw new GeometryError("PARSE_ERROR", `ASCII STL line ${line}: expected 'facet' or 'endsolid' but found "${wordAt(bytes, tokenStart, n)}".`, { line });
+      unexpected("'facet' or 'endsolid'", `ASCII STL line ${line}: expected 'facet' or 'endsolid' but found "${wordAt(bytes, tokenStart, n)}".`);
     }
     const facetLine = line;
     expect("normal", "after 'facet'");
@@ -109,7 +115,7 @@ export function parseAsciiStl(bytes: Uint8Array): AsciiStlParseResult {
       if (!next()) truncated("'vertex' or 'endloop'");
       if (is("endloop")) break;
       if (!is("vertex")) {
-        throw new GeometryError("PARSE_ERROR", `ASCII STL line ${line}: expected 'vertex' or 'endloop' in facet ${facetCount + 1} but found "${wordAt(bytes, tokenStart, n)}".`, { line });
+        unexpected("'vertex' or 'endloop'", `ASCII STL line ${line}: expected 'vertex' or 'endloop' in facet ${facetCount + 1} but found "${wordAt(bytes, tokenStart, n)}".`);
       }
       if (3 * count + 3 > loop.length) {
         const grown = new Float64Array(loop.length * 2);
@@ -120,6 +126,7 @@ export function parseAsciiStl(bytes: Uint8Array): AsciiStlParseResult {
         if (!next()) truncated(`the ${"xyz"[k]} coordinate of a vertex`);
         const v = scanFloat(bytes, tokenStart, tokenEnd);
         if (scanState.end !== tokenEnd) {
+          if (tokenEnd === n) truncated(`the ${"xyz"[k]} coordinate of a vertex`);
           throw new GeometryError("BAD_NUMBER", `ASCII STL line ${line}: expected a number for the ${"xyz"[k]} coordinate of a vertex of facet ${facetCount + 1} but found "${wordAt(bytes, tokenStart, n)}".`, { line });
         }
         if (!Number.isFinite(v)) {

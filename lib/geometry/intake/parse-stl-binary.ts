@@ -66,7 +66,7 @@ export function parseBinaryStl(bytes: Uint8Array): StlParseResult {
         const at = o + 4 * k;
         throw new GeometryError(
           "BAD_NUMBER",
-          `The binary STL has a ${Number.isNaN(v) ? "NaN" : "infinite"} coordinate at byte offset ${at} (facet ${f + 1}, vertex ${Math.floor(k / 3) + 1}, ${"xyz"[k % 3]}).`,
+          `The binary STL has ${Number.isNaN(v) ? "a NaN" : "an infinite"} coordinate at byte offset ${at} (facet ${f + 1}, vertex ${Math.floor(k / 3) + 1}, ${"xyz"[k % 3]}).`,
           { byteOffset: at },
         );
       }

@@ -216,5 +216,6 @@ function countReferenced(triangles: Uint32Array, vertexCount: number): number {
 }
 
 function formatLength(x: number): string {
-  return x === 0 ? "0" : x.toPrecision(2);
+  if (x === 0) return "0";
+  return x < 1e-3 || x >= 1e6 ? x.toExponential(1) : String(Number(x.toPrecision(2)));
 }

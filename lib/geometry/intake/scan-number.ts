@@ -15,11 +15,15 @@ for (let k = 0, p = 1; k < 23; k++, p *= 10) POW10[k] = p;
 
 /**
  * Scans a decimal floating-point number (`[+-]digits[.digits][(e|E)[+-]digits]`, also `.5` and `5.`) at `start`.
- * Returns the number, or NaN when no number starts there. The fast path is exact when the significand has at most
- * 15 digits and the decimal exponent is within ±22 (Clinger's fast path: both operands exact, one rounding;
- * Source: W. D. Clinger, "How to Read Floating Point Numbers Accurately", PLDI 1990); other inputs fall back to
- * `Number()` on that slice, so every result equals what JavaScript itself would parse.
- * A result of ±Infinity means the literal overflowed (e.g. `1e999`); callers reject it.
+ * Returns the number, or NaN when no number starts there. A result of ±Infinity means the literal overflowed
+ * (e.g. `1e999`); callers reject it.
+ *
+ * Accuracy: up to 15 significant digits with a decimal exponent within ±22 the result is exact-rounded (Clinger's
+ * fast path: both operands exact, one rounding; Source: W. D. Clinger, "How to Read Floating Point Numbers
+ * Accurately", PLDI 1990). 16–19 digits (what shortest round-trip printing of doubles produces) go through
+ * double-double arithmetic (Source: T. J. Dekker, "A floating-point technique for extending the available
+ * precision", Numer. Math. 18, 1971), which rounds correctly except within ~1e-15 ulp of a halfway case. Anything
+ * longer falls back to `Number()` on that slice.
  */
 export function scanFloat(bytes: Uint8Array, start: number, end: number): number {
   let i = start;
@@ -29,22 +33,21 @@ export function scanFloat(bytes: Uint8Array, start: number, end: number): number
     negative = c === 45;
     i++;
   }
-  let mantissa = 0;
-  let digits = 0; // significant digits accumulated into mantissa
-  let dropped = 0; // integer digits beyond the fast-path precision
+  let hi = 0; // first 15 significant digits
+  let lo = 0; // next up to 4 significant digits
+  let loDigits = 0;
+  let digits = 0; // significant digits seen
   let sawDigit = false;
   let exp10 = 0;
   while (i < end) {
     c = bytes[i];
     if (c < 48 || c > 57) break;
     sawDigit = true;
-    if (digits < 15) {
-      if (mantissa !== 0 || c !== 48) {
-        mantissa = mantissa * 10 + (c - 48);
-        digits++;
-      }
-    } else {
-      dropped++;
+    if (digits > 0 || c !== 48) {
+      if (digits < 15) hi = hi * 10 + (c - 48);
+      else if (digits < 19) { lo = lo * 10 + (c - 48); loDigits++; }
+      else exp10++;
+      digits++;
     }
     i++;
   }
@@ -54,14 +57,12 @@ export function scanFloat(bytes: Uint8Array, start: number, end: number): number
       c = bytes[i];
       if (c < 48 || c > 57) break;
       sawDigit = true;
-      if (digits < 15) {
-        if (mantissa !== 0 || c !== 48) {
-          mantissa = mantissa * 10 + (c - 48);
-          digits++;
-        }
-        exp10--;
+      if (digits > 0 || c !== 48) {
+        if (digits < 15) { hi = hi * 10 + (c - 48); exp10--; }
+        else if (digits < 19) { lo = lo * 10 + (c - 48); loDigits++; exp10--; }
+        digits++;
       } else {
-        dropped++;
+        exp10--;
       }
       i++;
     }
@@ -70,7 +71,6 @@ export function scanFloat(bytes: Uint8Array, start: number, end: number): number
     scanState.end = start;
     return NaN;
   }
-  let slow = dropped > 0;
   if (i < end && (bytes[i] === 101 || bytes[i] === 69) /* e E */) {
     let j = i + 1;
     let expNegative = false;
@@ -93,10 +93,42 @@ export function scanFloat(bytes: Uint8Array, start: number, end: number): number
     }
   }
   scanState.end = i;
-  if (!slow && mantissa === 0) return negative ? -0 : 0;
-  if (slow || exp10 > 22 || exp10 < -22) return slowParse(bytes, start, i);
-  const v = exp10 >= 0 ? mantissa * POW10[exp10] : mantissa / POW10[-exp10];
+  if (digits === 0) return negative ? -0 : 0;
+  if (digits > 19 || exp10 > 22 || exp10 < -22) return slowParse(bytes, start, i);
+  let v: number;
+  if (digits <= 15) {
+    v = exp10 >= 0 ? hi * POW10[exp10] : hi / POW10[-exp10];
+  } else {
+    // N = hi·10^loDigits + lo as a double-double (a, b), then scaled by 10^exp10.
+    const scale = POW10[loDigits];
+    let a = hi * scale;
+    let b = twoProductError(hi, scale, a);
+    const s = a + lo;
+    const bb = s - a;
+    b += (a - (s - bb)) + (lo - bb);
+    a = s;
+    if (exp10 >= 0) {
+      const p = POW10[exp10];
+      const q = a * p;
+      v = q + (twoProductError(a, p, q) + b * p);
+    } else {
+      const p = POW10[-exp10];
+      const q1 = a / p;
+      const prod = q1 * p;
+      const r = a - prod - twoProductError(q1, p, prod) + b;
+      v = q1 + r / p;
+    }
+  }
   return negative ? -v : v;
+}
+
+/** Exact error x·y − p of the rounded product p = fl(x·y), by Dekker's splitting (no fused multiply-add in JS). */
+function twoProductError(x: number, y: number, p: number): number {
+  let t = 134217729 * x; // 2^27 + 1
+  const xh = t - (t - x), xl = x - xh;
+  t = 134217729 * y;
+  const yh = t - (t - y), yl = y - yh;
+  return ((xh * yh - p) + xh * yl + xl * yh) + xl * yl;
 }
 
 function slowParse(bytes: Uint8Array, start: number, end: number): number {

@@ -56,13 +56,15 @@ export function weldVertices(positions: Float64Array, active: Uint8Array | null,
   const reach = tol * inv; // tolerance as a fraction of a cell
   const tol2 = tol * tol;
 
-  let size = 1;
-  while (size < activeCount * 2) size <<= 1;
-  const mask = size - 1;
-  const keyX = new Int32Array(size);
-  const keyY = new Int32Array(size);
-  const keyZ = new Int32Array(size);
-  const head = new Int32Array(size).fill(-1);
+  // Open-addressing table, 4 Int32 per slot: cell x, y, z and the newest representative in the cell (−1 = empty).
+  // Starts at ≈ one slot per two points and doubles at half load, so meshes with few distinct vertices (STL
+  // corners: about one in six) stay cache-friendly.
+  let size = 1 << 10;
+  while (size < activeCount / 2) size <<= 1;
+  let mask = size - 1;
+  let table = new Int32Array(4 * size);
+  for (let s = 3; s < table.length; s += 4) table[s] = -1;
+  let occupied = 0;
   const next = new Int32Array(count);
   let welded = 0;
 
@@ -77,6 +79,7 @@ export function weldVertices(positions: Float64Array, active: Uint8Array | null,
     const oy = ry < reach ? -1 : ry > 1 - reach ? 1 : 0;
     const oz = rz < reach ? -1 : rz > 1 - reach ? 1 : 0;
     let best = -1;
+    let own = -1; // slot of the own cell (found or empty)
     for (let a = 0; a <= (ox !== 0 ? 1 : 0); a++) {
       const qx = cx + a * ox;
       for (let b = 0; b <= (oy !== 0 ? 1 : 0); b++) {
@@ -84,8 +87,9 @@ export function weldVertices(positions: Float64Array, active: Uint8Array | null,
         for (let c = 0; c <= (oz !== 0 ? 1 : 0); c++) {
           const qz = cz + c * oz;
           let s = hash(qx, qy, qz) & mask;
-          while (head[s] !== -1 && (keyX[s] !== qx || keyY[s] !== qy || keyZ[s] !== qz)) s = (s + 1) & mask;
-          for (let r = head[s]; r !== -1; r = next[r]) {
+          while (table[4 * s + 3] !== -1 && (table[4 * s] !== qx || table[4 * s + 1] !== qy || table[4 * s + 2] !== qz)) s = (s + 1) & mask;
+          if (a === 0 && b === 0 && c === 0) own = s;
+          for (let r = table[4 * s + 3]; r !== -1; r = next[r]) {
             if (best !== -1 && r > best) continue;
             const dx = positions[3 * r] - x, dy = positions[3 * r + 1] - y, dz = positions[3 * r + 2] - z;
             if (dx * dx + dy * dy + dz * dz <= tol2) best = r;
@@ -98,15 +102,30 @@ export function weldVertices(positions: Float64Array, active: Uint8Array | null,
       welded++;
       continue;
     }
-    let s = hash(cx, cy, cz) & mask;
-    while (head[s] !== -1 && (keyX[s] !== cx || keyY[s] !== cy || keyZ[s] !== cz)) s = (s + 1) & mask;
-    if (head[s] === -1) {
-      keyX[s] = cx;
-      keyY[s] = cy;
-      keyZ[s] = cz;
+    if (table[4 * own + 3] === -1) {
+      table[4 * own] = cx;
+      table[4 * own + 1] = cy;
+      table[4 * own + 2] = cz;
+      occupied++;
     }
-    next[p] = head[s];
-    head[s] = p;
+    next[p] = table[4 * own + 3];
+    table[4 * own + 3] = p;
+    if (occupied * 2 > size) {
+      const old = table;
+      size <<= 1;
+      mask = size - 1;
+      table = new Int32Array(4 * size);
+      for (let s = 3; s < table.length; s += 4) table[s] = -1;
+      for (let o = 0; o < old.length; o += 4) {
+        if (old[o + 3] === -1) continue;
+        let s = hash(old[o], old[o + 1], old[o + 2]) & mask;
+        while (table[4 * s + 3] !== -1) s = (s + 1) & mask;
+        table[4 * s] = old[o];
+        table[4 * s + 1] = old[o + 1];
+        table[4 * s + 2] = old[o + 2];
+        table[4 * s + 3] = old[o + 3];
+      }
+    }
   }
   return { representative, welded };
 }
