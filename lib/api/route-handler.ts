@@ -40,6 +40,14 @@ export interface NextRouteContext {
   params: Promise<unknown>;
 }
 
+/**
+ * A wrapped handler. `routeOptions` exposes what the wrapper enforces, so tests derive the expected status of every
+ * route and role from the permission table instead of restating it.
+ */
+export type RouteHandler = ((req: Request, context: NextRouteContext) => Promise<Response>) & {
+  routeOptions: { action: Action | undefined; auth: AuthMode; hasBody: boolean; hasParams: boolean };
+};
+
 const UNSAFE_METHODS = new Set(["POST", "PUT", "PATCH", "DELETE"]);
 
 /**
@@ -61,10 +69,10 @@ export function route<
 >(
   options: RouteOptions<P, Q, B, A>,
   handler: (ctx: RouteContext<P, Q, B, A>) => Promise<Response | object> | Response | object,
-): (req: Request, context: NextRouteContext) => Promise<Response> {
+): RouteHandler {
   const authRequired = options.auth !== "none" || options.action !== undefined;
 
-  return async (req, context) => {
+  const handle = async (req: Request, context: NextRouteContext): Promise<Response> => {
     try {
       if (UNSAFE_METHODS.has(req.method)) refuseCrossSite(req);
 
@@ -110,6 +118,9 @@ export function route<
       return errorResponse(new AppError("INTERNAL", "Something went wrong on our side. Please try again."));
     }
   };
+  return Object.assign(handle, {
+    routeOptions: { action: options.action, auth: authRequired ? "required" : "none", hasBody: !!options.body, hasParams: !!options.params },
+  } as const);
 }
 
 /**

@@ -1,7 +1,7 @@
 import path from "node:path";
 import { fileURLToPath, pathToFileURL } from "node:url";
 import { Umzug, SequelizeStorage, type MigrationParams } from "umzug";
-import type { QueryInterface } from "sequelize";
+import type { QueryInterface, Sequelize } from "sequelize";
 import { getSequelize } from "@/lib/db/sequelize";
 
 /**
@@ -14,8 +14,7 @@ export type Migration = (params: MigrationParams<MigrationContext>) => Promise<v
 
 const MIGRATIONS_DIR = path.resolve(path.dirname(fileURLToPath(import.meta.url)), "../../migrations");
 
-function createMigrator() {
-  const sequelize = getSequelize();
+function createMigrator(sequelize: Sequelize = getSequelize()) {
   return new Umzug<MigrationContext>({
     migrations: {
       glob: ["*.ts", { cwd: MIGRATIONS_DIR, ignore: ["*.d.ts", "*.test.ts"] }],
@@ -34,9 +33,14 @@ function createMigrator() {
   });
 }
 
+/** Options shared by the functions below; `sequelize` targets another database (tests of a fresh database). */
+export interface MigratorOptions {
+  sequelize?: Sequelize;
+}
+
 /** Applies every pending migration; returns the names applied. */
-export async function migrateUp(): Promise<string[]> {
-  const done = await createMigrator().up();
+export async function migrateUp(opts: MigratorOptions = {}): Promise<string[]> {
+  const done = await createMigrator(opts.sequelize).up();
   return done.map((m) => m.name);
 }
 
@@ -44,8 +48,8 @@ export async function migrateUp(): Promise<string[]> {
  * Reverts migrations: by default the last one; `{ to: 0 }` reverts all, `{ to: "name" }` down to and including that
  * one, `{ step: n }` the last n. Returns the names reverted.
  */
-export async function migrateDown(opts: { to?: string | 0; step?: number } = {}): Promise<string[]> {
-  const migrator = createMigrator();
+export async function migrateDown(opts: MigratorOptions & { to?: string | 0; step?: number } = {}): Promise<string[]> {
+  const migrator = createMigrator(opts.sequelize);
   const done =
     opts.to !== undefined
       ? await migrator.down({ to: opts.to })
@@ -54,8 +58,8 @@ export async function migrateDown(opts: { to?: string | 0; step?: number } = {})
 }
 
 /** Names of applied and pending migrations (for scripts and health output). */
-export async function migrationStatus(): Promise<{ executed: string[]; pending: string[] }> {
-  const migrator = createMigrator();
+export async function migrationStatus(opts: MigratorOptions = {}): Promise<{ executed: string[]; pending: string[] }> {
+  const migrator = createMigrator(opts.sequelize);
   const [executed, pending] = await Promise.all([migrator.executed(), migrator.pending()]);
   return { executed: executed.map((m) => m.name), pending: pending.map((m) => m.name) };
 }
