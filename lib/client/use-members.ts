@@ -37,3 +37,11 @@ export function useRemoveMember() {
     onSuccess: () => client.invalidateQueries({ queryKey: queryKeys.members }),
   });
 }
+
+export function useRevokeInvitation() {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: (id: string) => apiFetch<void>(`/api/shop/invitations/${encodeURIComponent(id)}`, { method: "DELETE" }),
+    onSuccess: () => client.invalidateQueries({ queryKey: queryKeys.members }),
+  });
+}
