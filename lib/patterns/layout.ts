@@ -86,7 +86,7 @@ export function cutCountText(p: Pick<PieceReport, "count" | "mirrored">): string
 /** The words for a run's bevel: which face the wider cut is on. "top" = the face the pattern is traced on. */
 export function bevelText(b: Pick<BevelRun, "kind" | "opensTo" | "bevelDeg">): string {
   if (b.kind === "straight" || b.opensTo === "none") return "square cut";
-  return `bevel ${Math.abs(b.bevelDeg).toFixed(0)}\u00b0 wide on ${b.opensTo === "outer" ? "top" : "under"}`;
+  return `bevel ${Math.abs(b.bevelDeg).toFixed(0)}\u00b0 wide ${b.opensTo === "outer" ? "on top" : "underneath"}`;
 }
 
 function upright(angleDeg: number): number {

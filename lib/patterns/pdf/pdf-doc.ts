@@ -6,6 +6,7 @@
  */
 import PDFDocument from "pdfkit";
 import { jetbrainsMonoBold, jetbrainsMonoRegular } from "@/lib/fonts/font-files";
+import { printableText } from "@/lib/fonts/glyph-coverage";
 
 export type Doc = PDFKit.PDFDocument;
 
@@ -28,8 +29,36 @@ export function createDoc(opts: { compress: boolean; title: string; createdAt: D
   });
   doc.registerFont("mono", jetbrainsMonoRegular());
   doc.registerFont("mono-bold", jetbrainsMonoBold());
+  doc.font("mono-bold");
+  cacheShaping(doc);
   doc.font("mono");
+  cacheShaping(doc);
   return doc;
+}
+
+interface ShapingFont {
+  layoutRun?: (text: string, features?: unknown) => unknown;
+  __peelformCache?: Map<string, unknown>;
+}
+
+/**
+ * pdfkit caches glyph runs only when no OpenType features are given, and we must give them (ligatures off), so
+ * every label would be shaped by fontkit twice (width, then encoding). This keeps pdfkit's own per-font run cache
+ * for our fixed feature set: the same (scaled, read-only) run object pdfkit would cache itself. When pdfkit's
+ * internals differ (another version), nothing is patched and text is simply shaped each time.
+ */
+function cacheShaping(doc: Doc): void {
+  const font = (doc as unknown as { _font?: ShapingFont })._font;
+  if (!font || typeof font.layoutRun !== "function" || font.__peelformCache) return;
+  const original = font.layoutRun.bind(font);
+  const cache = new Map<string, unknown>();
+  font.__peelformCache = cache;
+  font.layoutRun = (t: string, features?: unknown) => {
+    if (features !== TEXT_FEATURES) return original(t, features);
+    let run = cache.get(t);
+    if (run === undefined) { run = original(t, features); cache.set(t, run); }
+    return run;
+  };
 }
 
 export interface TextStyle {
@@ -50,7 +79,8 @@ export function textWidth(s: string, size: number): number {
 }
 
 /** Draws one line of text with its anchor at (x, y), page points. */
-export function text(doc: Doc, s: string, x: number, y: number, st: TextStyle): void {
+export function text(doc: Doc, raw: string, x: number, y: number, st: TextStyle): void {
+  const s = printableText(raw);
   const w = textWidth(s, st.size);
   const dx = st.align === "center" ? -w / 2 : st.align === "right" ? -w : 0;
   const dy = st.valign === "middle" ? -(ASCENT_EM - CAP_EM / 2) * st.size : 0;
