@@ -19,6 +19,8 @@ export const TEST_ORIGIN = "http://127.0.0.1:54359";
 export async function call(handler: Handler, method: string, path: string, opts: CallOptions = {}): Promise<Response> {
   const headers = new Headers(opts.headers);
   if (opts.cookie) headers.set("cookie", opts.cookie);
+  // A random documentation-range client address per call, so per-IP limits never carry over between runs.
+  if (!headers.has("x-forwarded-for")) headers.set("x-forwarded-for", `203.0.113.${1 + Math.floor(Math.random() * 254)}`);
   let body: BodyInit | undefined;
   if (opts.json !== undefined) {
     headers.set("content-type", "application/json");
