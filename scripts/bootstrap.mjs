@@ -18,6 +18,7 @@ if (!modes.includes(mode)) {
 }
 
 const t0 = Date.now();
+process.env.PEELFORM_STARTED_AT = String(t0);
 const clock = () => `[${((Date.now() - t0) / 1000).toFixed(1).padStart(6)}s]`;
 
 function mtime(file) {

@@ -2,7 +2,8 @@
  * Console output of the stack scripts: numbered steps with timings, so a CI log reads top to bottom.
  * Every line is prefixed with the elapsed time since the script started.
  */
-const startedAt = Date.now();
+// scripts/bootstrap.mjs passes its own start time, so the clock also counts its npm ci.
+const startedAt = Number(process.env.PEELFORM_STARTED_AT) || Date.now();
 
 function clock(): string {
   const s = (Date.now() - startedAt) / 1000;
