@@ -54,7 +54,7 @@ export function flattenPiece(piece: PieceMesh, opts: FlattenPieceOptions = {}): 
   if (loops.length !== 1) {
     throw new GeometryError("BAD_PARAMETER", `Piece ${piece.label} has ${loops.length} boundary loops; flattening needs exactly one.`);
   }
-  const order = meshVertexOrdering(nv, triangles);
+  const order = meshVertexOrdering(nv, triangles, positions);
   const conformal = lscm(positions, triangles, frames, loops[0], order);
   const s1 = new Float64Array(nf), s2 = new Float64Array(nf);
   const lscmFlips = triangleSingularValues(frames.local, triangles, conformal.uv, s1, s2);

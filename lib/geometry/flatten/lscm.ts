@@ -1,7 +1,7 @@
 import { GeometryError } from "../errors";
 import type { SolverStats } from "../report-types";
-import { factorLdlt } from "../sparse/ldlt";
-import { solveSpd } from "../sparse/solve-spd";
+import { entryIndex } from "../sparse/csr-matrix";
+import { factorHermitian, solveHermitianRefined } from "../sparse/ldlt-hermitian";
 import { csrFromTriplets, TripletList } from "../sparse/triplets";
 import type { TriangleFrames } from "./triangle-frames";
 
@@ -20,9 +20,10 @@ export interface LscmResult {
  * Texture Atlas Generation", SIGGRAPH). The conformal energy is assembled in its equivalent form
  * E_C(u, v) = E_D(u) + E_D(v) − A(u, v): Dirichlet energy (cotan Laplacian) minus the signed area of the image,
  * which depends only on boundary vertices (Mullen, Tong, Alliez & Desbrun 2008, "Spectral Conformal
- * Parameterization", §3; Hutchinson 1991). Unknowns are interleaved (u_i, v_i) in a nested-dissection vertex
- * order; two far-apart boundary vertices are pinned at (0, 0) and (d, 0), d their 3D distance, and the reduced
- * SPD system is solved by sparse LDLᵀ with iterative refinement. Finally the map is scaled by √(A3D / A2D) so
+ * Parameterization", §3; Hutchinson 1991). The 2V×2V real system is the real form of a V×V complex Hermitian
+ * one, z = u + i·v, which is what is factorised (LDLᴴ, nested-dissection vertex order). Two far-apart boundary
+ * vertices are pinned at (0, 0) and (d, 0), d their 3D distance; the reduced positive definite system is solved
+ * directly with iterative refinement. Finally the map is scaled by √(A3D / A2D) so
  * total flat area = 3D area (the conformal map fixes shape, not size).
  *
  * @param positions #V×3 (only for choosing pins)
@@ -56,51 +57,58 @@ export function lscm(
   const p0 = farFrom(boundary[0]).v;
   const far = farFrom(p0);
   const p1 = far.v;
-  const pinned = new Float64Array(2 * nv);
-  pinned[2 * p1] = far.d;
-  // free dof numbering in nested-dissection order
-  const freeIndex = new Int32Array(2 * nv).fill(-1);
+  // complex unknown z = u + i·v per vertex; pins z_p0 = 0, z_p1 = d
+  const pinnedRe = new Float64Array(nv);
+  pinnedRe[p1] = far.d;
+  const freeIndex = new Int32Array(nv).fill(-1);
   let nFree = 0;
   for (let k = 0; k < nv; k++) {
     const v = order[k];
-    if (v === p0 || v === p1) continue;
-    freeIndex[2 * v] = nFree++;
-    freeIndex[2 * v + 1] = nFree++;
+    if (v !== p0 && v !== p1) freeIndex[v] = nFree++;
   }
-  const rhs = new Float64Array(nFree);
-  const trip = new TripletList(24 * nf + 4 * boundary.length);
-  const add = (r: number, c: number, val: number) => {
-    const fr = freeIndex[r];
-    if (fr < 0) return;
-    const fc = freeIndex[c];
-    if (fc >= 0) trip.add(fr, fc, val);
-    else rhs[fr] -= val * pinned[c];
-  };
+  // H = L + i·A': L the cotan Laplacian (w = ½cot per corner), A' from the area term. With x = (u, v) the real
+  // form of H is [[L, −A'], [A', L]]; −A(u, v) = −½ Σ_ccw edges i→j (u_i v_j − u_j v_i) gives A'_ij = ½, A'_ji = −½.
+  const trip = new TripletList(12 * nf + 2 * boundary.length);
+  const rhsRe = new Float64Array(nFree), rhsIm = new Float64Array(nFree);
   const cot = frames.cot;
   for (let f = 0; f < nf; f++) {
     for (let k = 0; k < 3; k++) {
       const i = triangles[3 * f + ((k + 1) % 3)], j = triangles[3 * f + ((k + 2) % 3)];
       const w = 0.5 * cot[3 * f + k];
-      for (let c = 0; c < 2; c++) {
-        const a = 2 * i + c, b = 2 * j + c;
-        add(a, a, w); add(b, b, w); add(a, b, -w); add(b, a, -w);
-      }
+      const fi = freeIndex[i], fj = freeIndex[j];
+      if (fi >= 0) trip.add(fi, fi, w);
+      if (fj >= 0) trip.add(fj, fj, w);
+      if (fi >= 0 && fj >= 0) { trip.add(fi, fj, -w); trip.add(fj, fi, -w); }
+      else if (fi >= 0) rhsRe[fi] += w * pinnedRe[j];
+      else if (fj >= 0) rhsRe[fj] += w * pinnedRe[i];
     }
   }
-  // −A(u,v): the boundary runs clockwise (hole on the left); counter-clockwise edge i→j is reversed chain order
+  const re = csrFromTriplets(nFree, trip);
+  const im = new Float64Array(re.values.length);
+  // the boundary runs clockwise (hole on the left); the counter-clockwise edge i → j is reversed chain order
   const nb = boundary.length;
   for (let s = 0; s < nb; s++) {
-    const j = boundary[s], i = boundary[(s + 1) % nb]; // CCW edge i → j
-    // A = ½(u_i v_j − u_j v_i); ½xᵀQx has cross coefficient Q[u_i, v_j] for u_i·v_j
-    add(2 * i, 2 * j + 1, -0.5); add(2 * j + 1, 2 * i, -0.5);
-    add(2 * j, 2 * i + 1, 0.5); add(2 * i + 1, 2 * j, 0.5);
+    const j = boundary[s], i = boundary[(s + 1) % nb];
+    const fi = freeIndex[i], fj = freeIndex[j];
+    if (fi >= 0 && fj >= 0) {
+      im[entryIndex(re, fi, fj)] += 0.5;
+      im[entryIndex(re, fj, fi)] -= 0.5;
+    } else if (fi >= 0) {
+      rhsIm[fi] -= 0.5 * pinnedRe[j]; // b_i −= (i·½)·z_j
+    } else if (fj >= 0) {
+      rhsIm[fj] += 0.5 * pinnedRe[i]; // b_j −= (−i·½)·z_i
+    }
   }
-  const q = csrFromTriplets(nFree, trip);
-  const factor = factorLdlt(q);
-  const x = new Float64Array(nFree);
-  const stats = solveSpd(q, factor, rhs, x);
+  const h = { re, im };
+  const factor = factorHermitian(h);
+  const zr = new Float64Array(nFree), zi = new Float64Array(nFree);
+  const stats = solveHermitianRefined(h, factor, rhsRe, rhsIm, zr, zi);
   const uv = new Float64Array(2 * nv);
-  for (let d = 0; d < 2 * nv; d++) uv[d] = freeIndex[d] >= 0 ? x[freeIndex[d]] : pinned[d];
+  for (let v = 0; v < nv; v++) {
+    const fi = freeIndex[v];
+    if (fi >= 0) { uv[2 * v] = zr[fi]; uv[2 * v + 1] = zi[fi]; }
+    else { uv[2 * v] = pinnedRe[v]; uv[2 * v + 1] = 0; }
+  }
   // scale to the 3D area
   let a2 = 0, a3 = 0;
   for (let f = 0; f < nf; f++) {

@@ -58,3 +58,15 @@ export function entry(a: CsrMatrix, i: number, j: number): number {
   }
   return 0;
 }
+
+/** Storage position of A_ij, or −1 when not stored (binary search in row i). */
+export function entryIndex(a: CsrMatrix, i: number, j: number): number {
+  let lo = a.rowPtr[i], hi = a.rowPtr[i + 1] - 1;
+  while (lo <= hi) {
+    const mid = (lo + hi) >> 1;
+    const c = a.colIdx[mid];
+    if (c === j) return mid;
+    if (c < j) lo = mid + 1; else hi = mid - 1;
+  }
+  return -1;
+}

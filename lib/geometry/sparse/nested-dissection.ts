@@ -14,7 +14,7 @@
  * @returns perm with perm[newIndex] = oldIndex
  */
 export function nestedDissection(n: number, ptr: Uint32Array, adj: Uint32Array, coords?: Float64Array): Uint32Array {
-  const LEAF = 48;
+  const LEAF = 16;
   const perm = new Uint32Array(n);
   let out = 0;
   const tag = new Int32Array(n).fill(-1);
@@ -116,6 +116,7 @@ export function nestedDissection(n: number, ptr: Uint32Array, adj: Uint32Array, 
   };
 
   const keys = new Float64Array(n);
+  const scratch = new Float64Array(n);
   /** median-plane split of the set tagged t (all members currently carry tag t) */
   const coordinateSplit = (verts: Int32Array, t: number): { a: Int32Array; b: Int32Array; s: Int32Array } | null => {
     const c = coords!;
@@ -128,8 +129,8 @@ export function nestedDissection(n: number, ptr: Uint32Array, adj: Uint32Array, 
     }
     if (!(bestExtent > 0)) return null;
     for (let i = 0; i < m; i++) keys[i] = c[3 * verts[i] + best];
-    const sorted = keys.subarray(0, m).slice().sort();
-    const median = sorted[m >> 1];
+    scratch.set(keys.subarray(0, m));
+    const median = selectKth(scratch, m, m >> 1);
     const far = -4 - 4 * n - t; // temporary marker for the far side
     for (let i = 0; i < m; i++) if (keys[i] >= median) tag[verts[i]] = far;
     const a: number[] = [], b: number[] = [], s: number[] = [];
@@ -156,4 +157,22 @@ export function invertPermutation(perm: Uint32Array): Uint32Array {
   const inv = new Uint32Array(perm.length);
   for (let i = 0; i < perm.length; i++) inv[perm[i]] = i;
   return inv;
+}
+
+/** k-th smallest of a[0..m) (Hoare's quickselect, expected O(m)); reorders a. */
+function selectKth(a: Float64Array, m: number, k: number): number {
+  let lo = 0, hi = m - 1;
+  while (lo < hi) {
+    const pivot = a[(lo + hi) >> 1];
+    let i = lo, j = hi;
+    while (i <= j) {
+      while (a[i] < pivot) i++;
+      while (a[j] > pivot) j--;
+      if (i <= j) { const t = a[i]; a[i] = a[j]; a[j] = t; i++; j--; }
+    }
+    if (k <= j) hi = j;
+    else if (k >= i) lo = i;
+    else return a[k];
+  }
+  return a[k];
 }
