@@ -61,8 +61,8 @@ export interface LayoutPiece {
 
 export interface PatternLayout {
   pieces: LayoutPiece[];
-  /** pieces that have no flat outline (not flattenable), listed on the cover */
-  skipped: PieceReport[];
+  /** pieces not drawn, with the reason: not flattenable, or cut as another piece's mirrored copy (count 0) */
+  skipped: { piece: PieceReport; reason: string }[];
   /** sheet extents including the padding, mm */
   box: Box;
   widthMm: number;
@@ -76,8 +76,15 @@ export const TICK_LENGTH_MM = 4;
 export const TICK_NUMBER_SIZE_MM = 2.4;
 export const RUN_TEXT_SIZE_MM = 2.4;
 
+/** Label of the piece a count-0 piece is the mirrored copy of (the pipeline adds `mirrorOf`), or null. */
+export function mirrorOfLabel(p: PieceReport): string | null {
+  const m = (p as PieceReport & { mirrorOf?: unknown }).mirrorOf;
+  return typeof m === "string" && m.length > 0 ? m : null;
+}
+
 /** Text shown for how many to cut. */
-export function cutCountText(p: Pick<PieceReport, "count" | "mirrored">): string {
+export function cutCountText(p: Pick<PieceReport, "count" | "mirrored"> & { mirrorOf?: string | null }): string {
+  if (p.count === 0) return p.mirrorOf ? `mirror copy of ${p.mirrorOf}` : "not cut";
   if (!p.mirrored) return `cut ${p.count}`;
   if (p.count === 2) return "cut 2, one mirrored";
   return `cut ${p.count}, ${Math.floor(p.count / 2)} mirrored`;
@@ -190,9 +197,17 @@ function layoutPiece(p: PieceReport, f: number, materialText: string, thicknessM
 export function buildLayout(report: FlattenReport, materialText: string, thicknessMm: number): PatternLayout {
   const f = MM_PER_UNIT[report.units];
   const pieces: LayoutPiece[] = [];
-  const skipped: PieceReport[] = [];
+  const skipped: PatternLayout["skipped"] = [];
   for (const p of report.pieces) {
-    if (!p.flattenable || p.outline.length < 3) { skipped.push(p); continue; }
+    if (!p.flattenable || p.outline.length < 3) {
+      skipped.push({ piece: p, reason: p.problem ?? "it could not be flattened" });
+      continue;
+    }
+    if (p.count === 0) {
+      const twin = mirrorOfLabel(p);
+      skipped.push({ piece: p, reason: twin ? `it is cut as the mirrored copy of ${twin} (see ${twin}: cut 2, one mirrored)` : "its count is 0" });
+      continue;
+    }
     pieces.push(layoutPiece(p, f, materialText, thicknessMm));
   }
   let minX = Infinity, minY = Infinity, maxX = -Infinity, maxY = -Infinity;

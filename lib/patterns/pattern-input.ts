@@ -81,7 +81,7 @@ export function validatePatternInput(input: PatternInput): void {
     for (const pt of p.outline) if (!finite(pt[0]) || !finite(pt[1])) bad(`piece ${p.label}: outline has a non-finite coordinate`);
     for (const t of p.ticks) if (!finite(t.x) || !finite(t.y) || !finite(t.nx) || !finite(t.ny)) bad(`piece ${p.label}: tick ${t.number} has a non-finite coordinate`);
     for (const b of p.bevels) for (const pt of b.path) if (!finite(pt[0]) || !finite(pt[1])) bad(`piece ${p.label}: seam run ${b.run} has a non-finite coordinate`);
-    if (!Number.isInteger(p.count) || p.count < 1) bad(`piece ${p.label}: count must be a whole number of at least 1`);
+    if (!Number.isInteger(p.count) || p.count < 0) bad(`piece ${p.label}: count must be a whole number (0 = cut as another piece's mirrored copy)`);
   }
   const labels = new Set<string>();
   for (const p of report.pieces) {

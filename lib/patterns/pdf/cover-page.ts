@@ -5,7 +5,7 @@
 import { SAFETY_CAUTIONS } from "@/lib/safety/cautions";
 import { PAPER_SIZES } from "../paper-sizes";
 import { formatArea, formatDate, formatLength, formatPercent } from "../format";
-import { cutCountText } from "../layout";
+import { cutCountText, mirrorOfLabel } from "../layout";
 import { text, wrap } from "./pdf-doc";
 import { addPage, type RenderCtx } from "./render-context";
 import { drawTable } from "./table";
@@ -59,7 +59,7 @@ export function drawCoverPage(ctx: RenderCtx): void {
   y += cautionH + 10;
 
   const notes = [...report.warnings];
-  for (const p of layout.skipped) notes.push(`Piece ${p.label} is not in this pattern: ${p.problem ?? "it could not be flattened"}`);
+  for (const { piece, reason } of layout.skipped) notes.push(`Piece ${piece.label} is not drawn: ${reason}`);
   if (notes.length > 0) {
     text(doc, "Warnings", box.x, y, { size: 9, bold: true, color: "#991b1b" });
     y += 12;
@@ -84,7 +84,7 @@ export function drawCoverPage(ctx: RenderCtx): void {
       flagged: r.flagged,
       cells: [
         r.label,
-        rep ? cutCountText(rep) : "",
+        rep ? cutCountText({ ...rep, mirrorOf: mirrorOfLabel(rep) }) : "",
         p ? formatArea(p.areaMm2) : "-",
         r.maxStretch == null ? "-" : formatPercent(r.maxStretch),
         r.p95Stretch == null ? "-" : formatPercent(r.p95Stretch),

@@ -8,6 +8,8 @@ import { ALIGN_CROSS_RADIUS_MM } from "./tile-pages";
 import { text, wrap } from "./pdf-doc";
 import { addPage, type RenderCtx } from "./render-context";
 
+const LEGEND_ROW_PT = 26;
+
 export function drawLegendPage(ctx: RenderCtx): void {
   const { doc, layout, plan } = ctx;
   const tiled = plan.rows * plan.cols > 1;
@@ -28,7 +30,8 @@ export function drawLegendPage(ctx: RenderCtx): void {
   y += 6;
 
   // Map: fit the sheet into the upper part of the page.
-  const mapH = box.h * 0.5;
+  // The legend below needs 8 rows of LEGEND_ROW_PT plus its title; the map takes the rest.
+  const mapH = Math.max(80, box.y + box.h - y - (8 * LEGEND_ROW_PT + 40) - 14);
   const s = Math.min(box.w / layout.widthMm, mapH / layout.heightMm);
   const ox = box.x + (box.w - layout.widthMm * s) / 2;
   const map: SheetMap = { x0: layout.box.minX, yTop: layout.box.maxY, ox, oy: y, s };
@@ -47,12 +50,12 @@ export function drawLegendPage(ctx: RenderCtx): void {
 
   text(doc, "Legend", box.x, y, { size: 11, bold: true });
   y += 16;
-  const sym = box.x + 4, label = box.x + 64;
-  const rowH = 20;
+  const sym = box.x + 4, label = box.x + 92;
+  const rowH = LEGEND_ROW_PT;
   const entry = (draw: (cx: number, cy: number) => void, words: string) => {
     draw(sym, y + 5);
     let yy = y;
-    for (const l of wrap(words, box.w - 64, 7.5)) { text(doc, l, label, yy, { size: 7.5 }); yy += 9.5; }
+    for (const l of wrap(words, box.w - 92, 7.5)) { text(doc, l, label, yy, { size: 7.5 }); yy += 9.5; }
     y = Math.max(y + rowH, yy + 6);
   };
   entry((x, cy) => { doc.lineWidth(CUT_LINE_PT).strokeColor("#000").moveTo(x, cy).lineTo(x + 48, cy).stroke(); },
@@ -67,12 +70,12 @@ export function drawLegendPage(ctx: RenderCtx): void {
   entry((x, cy) => {
     doc.lineWidth(0.5).strokeColor("#000").moveTo(x, cy - 6).lineTo(x + 48, cy - 6).stroke();
     chevron(ctx, x + 24, cy - 6, true);
-    foamSection(ctx, x + 34, cy, "top");
+    foamSection(ctx, x + 54, cy - 4, "top");
   }, "Bevel chevron, solid, pointing at the edge: bevel this edge, the wider cut on top (the face you trace on). The sketch shows the cut edge in section.");
   entry((x, cy) => {
     doc.lineWidth(0.5).strokeColor("#000").moveTo(x, cy - 6).lineTo(x + 48, cy - 6).stroke();
     chevron(ctx, x + 24, cy - 6, false);
-    foamSection(ctx, x + 34, cy, "under");
+    foamSection(ctx, x + 54, cy - 4, "under");
   }, "Bevel chevron, hollow, pointing away from the edge: bevel this edge, the wider cut underneath. Angles are per side, measured from square; both pieces of a seam get the same bevel.");
   entry((x, cy) => {
     const r = ALIGN_CROSS_RADIUS_MM * PT_PER_MM;
