@@ -23,9 +23,11 @@ export interface EdgeTable {
 export function buildEdgeTable(triangles: Uint32Array, vertexCount: number): EdgeTable {
   const sides = triangles.length;
   const count = new Uint32Array(vertexCount + 1);
-  for (let h = 0; h < sides; h++) {
-    const a = triangles[h], b = triangles[h - (h % 3) + ((h % 3) + 1) % 3];
+  for (let f = 0; f < sides; f += 3) {
+    const a = triangles[f], b = triangles[f + 1], c = triangles[f + 2];
     count[a < b ? a : b]++;
+    count[b < c ? b : c]++;
+    count[c < a ? c : a]++;
   }
   const bucketStart = new Uint32Array(vertexCount + 1);
   for (let v = 0, acc = 0; v < vertexCount; v++) {
@@ -35,9 +37,11 @@ export function buildEdgeTable(triangles: Uint32Array, vertexCount: number): Edg
   }
   const fill = bucketStart.slice(0, vertexCount);
   const bucketSide = new Uint32Array(sides);
-  for (let h = 0; h < sides; h++) {
-    const a = triangles[h], b = triangles[h - (h % 3) + ((h % 3) + 1) % 3];
-    bucketSide[fill[a < b ? a : b]++] = h;
+  for (let f = 0; f < sides; f += 3) {
+    const a = triangles[f], b = triangles[f + 1], c = triangles[f + 2];
+    bucketSide[fill[a < b ? a : b]++] = f;
+    bucketSide[fill[b < c ? b : c]++] = f + 1;
+    bucketSide[fill[c < a ? c : a]++] = f + 2;
   }
   const sideEdge = new Uint32Array(sides);
   const edgeLo = new Uint32Array(sides);
@@ -51,7 +55,7 @@ export function buildEdgeTable(triangles: Uint32Array, vertexCount: number): Edg
     vertexEdgeStart[v] = edgeCount;
     for (let k = bucketStart[v]; k < bucketStart[v + 1]; k++) {
       const h = bucketSide[k];
-      const a = triangles[h], b = triangles[h - (h % 3) + ((h % 3) + 1) % 3];
+      const a = triangles[h], b = triangles[h % 3 === 2 ? h - 2 : h + 1];
       const hi = a < b ? b : a;
       let e: number;
       if (stamp[hi] === v) {

@@ -146,6 +146,9 @@ export async function readMesh(bytes: Uint8Array, opts: ReadMeshOptions): Promis
     ];
     const result = await decimateToBudget(positions, clean.triangles, faceBudget, center);
     working = cleanTriangles(positions, result.triangles, diagonal).triangles;
+    if (working.length === 0) {
+      throw new GeometryError("BAD_PARAMETER", `The face budget of ${faceBudget} is too small: decimating ${faces} faces to it left no surface.`);
+    }
     decimated = {
       faceBudget,
       originalFaces: faces,

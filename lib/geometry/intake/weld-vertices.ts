@@ -57,10 +57,10 @@ export function weldVertices(positions: Float64Array, active: Uint8Array | null,
   const tol2 = tol * tol;
 
   // Open-addressing table, 4 Int32 per slot: cell x, y, z and the newest representative in the cell (−1 = empty).
-  // Starts at ≈ one slot per two points and doubles at half load, so meshes with few distinct vertices (STL
-  // corners: about one in six) stay cache-friendly.
+  // Starts at ≈ one slot per four points and doubles at half load, so meshes with few distinct vertices (STL
+  // corners: about one in six is new) keep a small, cache-friendly table.
   let size = 1 << 10;
-  while (size < activeCount / 2) size <<= 1;
+  while (size < activeCount / 4) size <<= 1;
   let mask = size - 1;
   let table = new Int32Array(4 * size);
   for (let s = 3; s < table.length; s += 4) table[s] = -1;
