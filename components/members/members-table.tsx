@@ -15,12 +15,11 @@ import { useChangeMemberRole, useRemoveMember } from "@/lib/client/use-members";
 export function MembersTable({ members, canManage, currentUserId }: { members: Member[]; canManage: boolean; currentUserId?: string }) {
   return (
     <div className="-mx-5 overflow-x-auto">
-      <table className="w-full min-w-[36rem] border-collapse text-sm">
+      <table className="w-full min-w-[32rem] border-collapse text-sm">
         <caption className="sr-only">Members of this shop</caption>
         <thead>
           <tr className="border-b border-kraft-200 text-left text-xs uppercase tracking-wider text-kraft-700">
-            <th scope="col" className="px-5 py-2 font-bold">Name</th>
-            <th scope="col" className="px-3 py-2 font-bold">E-mail</th>
+            <th scope="col" className="px-5 py-2 font-bold">Member</th>
             <th scope="col" className="px-3 py-2 font-bold">Role</th>
             <th scope="col" className="px-3 py-2 font-bold">Joined</th>
             {canManage ? <th scope="col" className="px-5 py-2 text-right font-bold">Actions</th> : null}
@@ -45,11 +44,15 @@ function MemberRow({ member, canManage, isSelf }: { member: Member; canManage: b
 
   return (
     <tr className="border-b border-kraft-100 last:border-0" data-member-email={member.email}>
-      <th scope="row" className="px-5 py-3 text-left font-medium whitespace-nowrap">
-        {member.name}
-        {isSelf ? <span className="ml-2 border border-kraft-500 px-1 text-xs font-normal text-kraft-700">you</span> : null}
+      <th scope="row" className="px-5 py-3 text-left font-medium">
+        <span className="block">
+          {member.name}
+          {isSelf ? <span className="ml-2 border border-kraft-500 px-1 text-xs font-normal text-kraft-700">you</span> : null}
+        </span>
+        <span className="block break-all text-xs font-normal text-kraft-700" data-testid="member-email">
+          {member.email}
+        </span>
       </th>
-      <td className="px-3 py-3 whitespace-nowrap text-kraft-700">{member.email}</td>
       <td className="px-3 py-3">
         {canManage ? (
           <>

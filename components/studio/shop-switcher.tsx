@@ -3,11 +3,11 @@
 import { useRouter } from "next/navigation";
 import { useId } from "react";
 import { errorMessage } from "@/lib/client/api-fetch";
-import { ROLE_LABELS, type MeResponse } from "@/lib/client/api-types";
+import type { MeResponse } from "@/lib/client/api-types";
 import { useSwitchShop } from "@/lib/client/use-me";
 import { useToast } from "@/components/toast/toast-provider";
 
-/** A select of the user's shops; switching reloads the studio for the new shop. */
+/** The active shop's name as a select of all the user's shops; switching reloads the studio for the new shop. */
 export function ShopSwitcher({ me }: { me: MeResponse }) {
   const id = useId();
   const router = useRouter();
@@ -35,11 +35,11 @@ export function ShopSwitcher({ me }: { me: MeResponse }) {
             onError: (err) => toast.error(errorMessage(err)),
           });
         }}
-        className="max-w-56 border border-foam-600 bg-foam-800 px-2 py-1 text-sm text-white focus:outline-2 focus:outline-foam-400"
+        className="max-w-[16rem] border border-foam-600 bg-foam-800 px-1 py-0.5 text-sm font-bold text-white hover:border-kraft-200 focus:outline-2 focus:outline-foam-400"
       >
         {me.shops.map((s) => (
           <option key={s.id} value={String(s.id)}>
-            {s.name} ({ROLE_LABELS[s.role] ?? s.role})
+            {s.name}
           </option>
         ))}
       </select>

@@ -48,15 +48,21 @@ export function StudioHeader({ initialMe }: { initialMe?: MeResponse }) {
 
         <div className="ml-auto flex flex-wrap items-center gap-3">
           {me.data ? (
-            <>
-              <div className="flex flex-col items-end leading-tight" data-testid="shop-identity">
-                <span className="text-sm font-bold" data-testid="shop-name">{me.data.shop.name}</span>
-                <span className="text-xs text-kraft-200">
-                  {me.data.user.name} · <span data-testid="user-role">{ROLE_LABELS[me.data.role] ?? me.data.role}</span>
-                </span>
-              </div>
-              {me.data.shops.length > 1 ? <ShopSwitcher me={me.data} /> : null}
-            </>
+            <div
+              className="flex flex-col items-end gap-0.5 leading-tight"
+              data-testid="shop-identity"
+              data-shop-name={me.data.shop.name}
+              data-role={me.data.role}
+            >
+              {me.data.shops.length > 1 ? (
+                <ShopSwitcher me={me.data} />
+              ) : (
+                <span className="text-sm font-bold">{me.data.shop.name}</span>
+              )}
+              <span className="text-xs text-kraft-200">
+                {me.data.user.name} · <span data-testid="user-role">{ROLE_LABELS[me.data.role] ?? me.data.role}</span>
+              </span>
+            </div>
           ) : null}
           <SignOutButton />
         </div>

@@ -1,5 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { e2eBaseUrl } from "./helpers/base-url";
+import { headerShopName, headerRole } from "./helpers/header";
 import { E2eBrowser, type PageProblem } from "./helpers/browser";
 
 /** The failed credentials call answers 401; Chromium logs every failed request, so that one line is expected. */
@@ -41,8 +42,8 @@ describe("accounts: landing, sign-up, sign-out, wrong password", () => {
     await page.getByLabel("Shop name").fill(shopName);
     await page.getByRole("button", { name: "Create shop and sign in" }).click();
     await page.waitForURL(/\/projects$/, { timeout: 30_000 });
-    expect((await page.getByTestId("shop-name").textContent())?.trim()).toBe(shopName);
-    expect((await page.getByTestId("user-role").textContent())?.trim()).toBe("Owner");
+    expect(await headerShopName(page)).toBe(shopName);
+    expect(await headerRole(page)).toBe("Owner");
     await page.getByText("No projects yet.").waitFor();
     // Signed in, the landing page sends you to your projects.
     await b.goto("/");
@@ -73,7 +74,7 @@ describe("accounts: landing, sign-up, sign-out, wrong password", () => {
     await page.getByLabel("Password", { exact: true }).fill(password);
     await page.getByRole("button", { name: "Sign in", exact: true }).click();
     await page.waitForURL(/\/projects$/, { timeout: 30_000 });
-    expect((await page.getByTestId("shop-name").textContent())?.trim()).toBe(shopName);
+    expect(await headerShopName(page)).toBe(shopName);
     expect(b.unexpectedProblems(isSignInRefusal)).toEqual([]);
   });
 });

@@ -1,5 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { demoEmail, e2eBaseUrl } from "./helpers/base-url";
+import { headerShopName, headerRole } from "./helpers/header";
 import { E2eBrowser } from "./helpers/browser";
 
 /**
@@ -22,7 +23,7 @@ describe("invite a new member by e-mail", () => {
     const page = b.page;
 
     await b.signIn(demoEmail("owner"));
-    const shopName = (await page.getByTestId("shop-name").textContent())?.trim() ?? "";
+    const shopName = await headerShopName(page);
     expect(shopName).not.toBe("");
 
     await b.goto("/members");
@@ -68,14 +69,14 @@ describe("invite a new member by e-mail", () => {
 
     await page.waitForURL(/\/projects$/, { timeout: 30_000 });
     await page.getByRole("heading", { level: 1, name: "Projects" }).waitFor();
-    expect((await page.getByTestId("shop-name").textContent())?.trim()).toBe(shopName);
-    expect((await page.getByTestId("user-role").textContent())?.trim()).toBe("Reviewer");
+    expect(await headerShopName(page)).toBe(shopName);
+    expect(await headerRole(page)).toBe("Reviewer");
     expect(await page.getByRole("button", { name: "New project" }).count()).toBe(0);
     await b.screenshot("invitee-projects");
 
     // The owner's members list now has the new reviewer; the link is used up.
     await b.goto("/members");
-    await page.getByRole("cell", { name: invitee }).waitFor();
+    await page.getByRole("row").filter({ hasText: invitee }).waitFor();
     await page.goto(href!);
     await page.getByText(/This invitation cannot be used/).waitFor();
 
