@@ -5,6 +5,7 @@
  *
  * Page coordinates are PDF points, origin top-left (pdfkit's convention). Layout coordinates are millimetres, y up.
  */
+import { GeometryError } from "@/lib/geometry/errors";
 import { PAPER_SIZES, PT_PER_MM, mmToPt, type PaperId } from "./paper-sizes";
 
 /** Page margin: 0.25 in, more than the unprintable border of common office printers. // Common practice */
@@ -13,6 +14,8 @@ export const PAGE_MARGIN_PT = 18;
 export const KEY_STRIP_PT = mmToPt(56);
 /** Gap between the drawing window and the key strip. */
 export const KEY_GAP_PT = mmToPt(3);
+/** Largest page side a PDF reader must support: 14 400 units (200 in). Source: ISO 32000-1:2008 Annex C.2. */
+export const MAX_PAGE_SIDE_PT = 14400;
 /** Narrowest `full` page, so the key strip fits, millimetres. */
 export const FULL_MIN_WIDTH_MM = 190;
 
@@ -74,6 +77,12 @@ export function planTiles(
   if (paper === "full") {
     const widthPt = Math.max(sheet.widthMm, FULL_MIN_WIDTH_MM) * PT_PER_MM + 2 * m;
     const heightPt = sheet.heightMm * PT_PER_MM + reserved;
+    if (widthPt > MAX_PAGE_SIDE_PT || heightPt > MAX_PAGE_SIDE_PT) {
+      throw new GeometryError(
+        "BAD_PARAMETER",
+        `The sheet is ${sheet.widthMm.toFixed(0)} x ${sheet.heightMm.toFixed(0)} mm; one PDF page can be at most 5080 mm (200 in) a side with its margins: choose a tiled paper size.`,
+      );
+    }
     best = {
       paper, orientation: widthPt > heightPt ? "landscape" : "portrait", widthPt, heightPt,
       contentXPt: m, contentYPt: m, contentWPt: sheet.widthMm * PT_PER_MM, contentHPt: sheet.heightMm * PT_PER_MM,
@@ -89,7 +98,7 @@ export function planTiles(
       const contentHPt = heightPt - reserved;
       const contentWMm = contentWPt / PT_PER_MM, contentHMm = contentHPt / PT_PER_MM;
       if (overlapMm * 2 >= Math.min(contentWMm, contentHMm)) {
-        throw new RangeError(`overlap ${overlapMm} mm is too large for ${size.name}`);
+        throw new GeometryError("BAD_PARAMETER", `overlap ${overlapMm} mm is too large for ${size.name}`);
       }
       const cols = countAlong(sheet.widthMm, contentWMm, overlapMm);
       const rows = countAlong(sheet.heightMm, contentHMm, overlapMm);

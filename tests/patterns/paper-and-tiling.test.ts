@@ -69,3 +69,10 @@ describe("planTiles", () => {
     expect(() => planTiles(sheet(500, 500), "letter", 150)).toThrow(/too large/);
   });
 });
+
+describe("full-size page limit", () => {
+  it("refuses a single page over 200 in a side (ISO 32000-1 Annex C.2: 14 400 units)", () => {
+    expect(() => planTiles({ left: 0, top: 0, widthMm: 5200, heightMm: 300 }, "full", 10)).toThrow(/at most 5080 mm/);
+    expect(planTiles({ left: 0, top: 0, widthMm: 4900, heightMm: 300 }, "full", 10).widthPt).toBeLessThan(14400);
+  });
+});

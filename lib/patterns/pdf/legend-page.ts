@@ -21,17 +21,17 @@ export function drawLegendPage(ctx: RenderCtx): void {
     ? [
         "1. Print every tile at 100 % and check the test squares on each page.",
         "2. Lay the tiles out by row (R) and column (C) as in the map below.",
-        `3. Lay each tile's right and bottom ${plan.overlapMm} mm band over the next tile; the dashed line shows where the next tile's window begins.`,
-        "4. Match the alignment crosses exactly (hold the pages up to a window), then tape.",
-        "5. Cut the pieces out on the solid line; transfer ticks and letters to the foam.",
+        "3. Trim the left and top margins of every tile that is not in column 1 or row 1, along its corner marks.",
+        `4. Lay each tile over its left and upper neighbours: its trimmed edge goes on their dashed line (${plan.overlapMm} mm in), the alignment crosses sit exactly on top of each other. Hold to a window to check, then tape.`,
+        "5. Cut the pieces out on the solid line; transfer ticks, letters and bevel marks to the foam.",
       ]
-    : ["1. Print at 100 % and check the test squares.", "2. Cut the pieces out on the solid line; transfer ticks and letters to the foam."];
+    : ["1. Print at 100 % and check the test squares.", "2. Cut the pieces out on the solid line; transfer ticks, letters and bevel marks to the foam."];
   for (const s of steps) for (const l of wrap(s, box.w, 7.5)) { text(doc, l, box.x, y, { size: 7.5 }); y += 10; }
   y += 6;
 
   // Map: fit the sheet into the upper part of the page.
-  // The legend below needs 8 rows of LEGEND_ROW_PT plus its title; the map takes the rest.
-  const mapH = Math.max(80, box.y + box.h - y - (8 * LEGEND_ROW_PT + 40) - 14);
+  // The legend below needs 9 rows of LEGEND_ROW_PT plus its title; the map takes the rest.
+  const mapH = Math.max(80, box.y + box.h - y - (9 * LEGEND_ROW_PT + 40) - 14);
   const s = Math.min(box.w / layout.widthMm, mapH / layout.heightMm);
   const ox = box.x + (box.w - layout.widthMm * s) / 2;
   const map: SheetMap = { x0: layout.box.minX, yTop: layout.box.maxY, ox, oy: y, s };
@@ -84,7 +84,9 @@ export function drawLegendPage(ctx: RenderCtx): void {
     doc.moveTo(x + 12, cy - 1.6 * r).lineTo(x + 12, cy + 1.6 * r).stroke();
   }, "Alignment cross: printed on both tiles of an overlap. Lay one over the other and tape.");
   entry((x, cy) => { doc.lineWidth(0.5).strokeColor("#6b7280").dash(4, { space: 3 }).moveTo(x, cy).lineTo(x + 48, cy).stroke(); doc.undash(); },
-    "Dashed line: the edge of the neighbouring tile's window (the overlap band lies between it and the page edge).");
+    "Dashed line: where the neighbouring tile's trimmed edge goes (the overlap band lies between it and the window edge).");
+  entry((x, cy) => { doc.lineWidth(0.6).strokeColor("#000").moveTo(x, cy + 8).lineTo(x, cy - 4).lineTo(x + 12, cy - 4).stroke(); },
+    "Corner mark: a corner of the tile's window. Trim the left and top margins along these.");
   entry(() => undefined, "'cut 2, one mirrored': cut one as printed and one with the pattern turned over.");
 }
 
