@@ -113,3 +113,28 @@ export function polylineLength(xy: Float64Array): number {
   for (let i = 2; i < xy.length; i += 2) s += Math.hypot(xy[i] - xy[i - 2], xy[i + 1] - xy[i - 1]);
   return s;
 }
+
+/** Whether segment (ax, ay)–(bx, by) meets the box (Liang–Barsky clipping). */
+function segmentMeetsBox(ax: number, ay: number, bx: number, by: number, b: Box): boolean {
+  let t0 = 0, t1 = 1;
+  const dx = bx - ax, dy = by - ay;
+  const p = [-dx, dx, -dy, dy];
+  const q = [ax - b.minX, b.maxX - ax, ay - b.minY, b.maxY - ay];
+  for (let i = 0; i < 4; i++) {
+    if (p[i] === 0) { if (q[i] < 0) return false; continue; }
+    const r = q[i] / p[i];
+    if (p[i] < 0) { if (r > t1) return false; if (r > t0) t0 = r; }
+    else { if (r < t0) return false; if (r < t1) t1 = r; }
+  }
+  return true;
+}
+
+/** Whether the closed polygon (its area, not just its outline) overlaps the box. */
+export function polygonMeetsBox(xy: Float64Array, b: Box): boolean {
+  const n = xy.length / 2;
+  for (let i = 0, j = n - 1; i < n; j = i++) {
+    if (segmentMeetsBox(xy[2 * j], xy[2 * j + 1], xy[2 * i], xy[2 * i + 1], b)) return true;
+  }
+  // No edge meets the box: either the box is inside the polygon or they are apart.
+  return pointInPolygon(xy, (b.minX + b.maxX) / 2, (b.minY + b.maxY) / 2);
+}

@@ -11,7 +11,8 @@ import { buildCutList } from "./cut-list";
 import { summarizeStretch } from "./stretch-summary";
 import { findFoamMaterial } from "./materials";
 import { PAPER_SIZES } from "./paper-sizes";
-import { planTiles } from "./tiling";
+import { markBlankTiles, planTiles } from "./tiling";
+import { polygonMeetsBox } from "./polygon";
 import { createdAtDate, validatePatternInput, validatePdfOptions, type PatternInput, type PatternPdfOptions } from "./pattern-input";
 import { createDoc } from "./pdf/pdf-doc";
 import type { RenderCtx } from "./pdf/render-context";
@@ -28,7 +29,9 @@ export function planPatternPdf(input: PatternInput, opts: PatternPdfOptions) {
   const material = findFoamMaterial(input.meta.material);
   const materialName = material ? material.name : input.meta.material;
   const layout = buildLayout(input.report, materialName, input.meta.thicknessMm);
-  const plan = planTiles({ left: layout.box.minX, top: layout.box.maxY, widthMm: layout.widthMm, heightMm: layout.heightMm }, opts.paper, overlapMm);
+  const grid = planTiles({ left: layout.box.minX, top: layout.box.maxY, widthMm: layout.widthMm, heightMm: layout.heightMm }, opts.paper, overlapMm);
+  const plan = markBlankTiles(grid, (box) =>
+    layout.pieces.some((p) => p.box.minX <= box.maxX && p.box.maxX >= box.minX && p.box.minY <= box.maxY && p.box.maxY >= box.minY && polygonMeetsBox(p.outline, box)));
   return { layout, plan, materialName, overlapMm };
 }
 

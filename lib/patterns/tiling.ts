@@ -28,6 +28,8 @@ export interface Tile {
   /** layout window: left edge and top edge, mm */
   x0: number;
   yTop: number;
+  /** no piece reaches into the window: the tile is not printed (the page map shows it as blank) */
+  blank: boolean;
 }
 
 export interface TilePlan {
@@ -113,8 +115,28 @@ export function planTiles(
   const tiles: Tile[] = [];
   for (let r = 1; r <= plan.rows; r++) {
     for (let c = 1; c <= plan.cols; c++) {
-      tiles.push({ row: r, col: c, name: tileName(r, c), x0: sheet.left + (c - 1) * plan.stepXMm, yTop: sheet.top - (r - 1) * plan.stepYMm });
+      tiles.push({ row: r, col: c, name: tileName(r, c), x0: sheet.left + (c - 1) * plan.stepXMm, yTop: sheet.top - (r - 1) * plan.stepYMm, blank: false });
     }
   }
   return { ...plan, tiles };
+}
+
+/** The tile's window as a layout box, mm. */
+export function tileWindow(plan: TilePlan, t: Tile): { minX: number; minY: number; maxX: number; maxY: number } {
+  return { minX: t.x0, maxX: t.x0 + plan.contentWMm, maxY: t.yTop, minY: t.yTop - plan.contentHMm };
+}
+
+/**
+ * Marks tiles whose window no piece reaches into as blank, so they are not printed. `meets(box)` tells whether
+ * any piece overlaps a window box.
+ */
+export function markBlankTiles(plan: TilePlan, meets: (box: ReturnType<typeof tileWindow>) => boolean): TilePlan {
+  if (plan.tiles.length === 1) return plan;
+  const tiles = plan.tiles.map((t) => ({ ...t, blank: !meets(tileWindow(plan, t)) }));
+  return { ...plan, tiles };
+}
+
+/** The tiles that get a page. */
+export function printedTiles(plan: TilePlan): Tile[] {
+  return plan.tiles.filter((t) => !t.blank);
 }

@@ -113,3 +113,23 @@ describe("tiling", () => {
     await expect(renderPatternPdf({ ...input([]), report: report([p]) }, { paper: "letter" })).rejects.toThrow(/non-finite/);
   });
 });
+
+describe("blank tiles", () => {
+  it("leaves out tiles no piece reaches into, and draws each printed piece's outline in full across its tiles", async () => {
+    // Two 60 mm squares at opposite corners of a 700 × 500 mm sheet: only the corner tiles hold anything.
+    const a = piece("A", [[0, 0], [60, 0], [60, 60], [0, 60]]);
+    const b = piece("B", [[640, 440], [700, 440], [700, 500], [640, 500]]);
+    const inp = input([a, b]);
+    const { plan } = planPatternPdf(inp, { paper: "letter" });
+    const printed = plan.tiles.filter((t) => !t.blank);
+    expect(plan.tiles.length).toBeGreaterThan(4);
+    expect(printed.length).toBe(2);
+    expect(printed.map((t) => t.name)).toEqual(["R1-C" + plan.cols, `R${plan.rows}-C1`]);
+    const pages = readPdfPages(await renderPatternPdf(inp, { paper: "letter", compress: false }));
+    expect(pages).toHaveLength(3 + printed.length);
+    for (const page of pages.slice(3)) {
+      const squares = strokedPolygons(page, 4).map(bbox).filter((q) => Math.abs(q.w / PT_PER_MM - 60) < 0.1 && Math.abs(q.h / PT_PER_MM - 60) < 0.1);
+      expect(squares).toHaveLength(1);
+    }
+  });
+});

@@ -24,7 +24,7 @@ export function drawCoverPage(ctx: RenderCtx): void {
   const target = report.scale.targetWidth != null ? `, target width ${formatLength(report.scale.targetWidth * f)}` : "";
   const paperText = plan.paper === "full"
     ? "one full-size page (plotter or projector)"
-    : `${PAPER_SIZES[plan.paper].name} ${plan.orientation}, ${plan.rows} x ${plan.cols} tiles, ${plan.overlapMm} mm overlap`;
+    : `${PAPER_SIZES[plan.paper].name} ${plan.orientation}, ${plan.rows} x ${plan.cols} tiles (${plan.tiles.filter((t) => !t.blank).length} printed), ${plan.overlapMm} mm overlap`;
   const surface = report.surface.kind === "neutral"
     ? `neutral surface of ${formatLength(report.surface.thickness * f)} foam (scan is the ${report.surface.scanFace} face)`
     : "scan surface as is";

@@ -69,13 +69,12 @@ function drawMiniMap(ctx: RenderCtx, x: number, y: number, w: number, h: number,
   const cell = Math.min(w / plan.cols, h / plan.rows);
   const gw = cell * plan.cols;
   const ox = x + (w - gw);
-  for (let r = 1; r <= plan.rows; r++) {
-    for (let c = 1; c <= plan.cols; c++) {
-      const cx = ox + (c - 1) * cell, cy = y + (r - 1) * cell;
-      doc.rect(cx + 0.5, cy + 0.5, cell - 1, cell - 1);
-      if (r === row && c === col) doc.fillColor("#111827").fill();
-      else doc.lineWidth(0.4).strokeColor("#6b7280").stroke();
-    }
+  for (const t of plan.tiles) {
+    const cx = ox + (t.col - 1) * cell, cy = y + (t.row - 1) * cell;
+    doc.rect(cx + 0.5, cy + 0.5, cell - 1, cell - 1);
+    if (t.row === row && t.col === col) doc.fillColor("#111827").fill();
+    else if (t.blank) doc.fillColor("#e5e7eb").fill();
+    else doc.lineWidth(0.4).strokeColor("#6b7280").stroke();
   }
   text(doc, "you are here", ox + gw / 2, y + plan.rows * cell + 3, { size: 5.5, align: "center", color: "#4b5563" });
 }

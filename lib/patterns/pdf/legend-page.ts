@@ -15,7 +15,9 @@ export function drawLegendPage(ctx: RenderCtx): void {
   const tiled = plan.rows * plan.cols > 1;
   const box = addPage(ctx, "legend", tiled ? "Page map and legend" : "Legend", ctx.infoPage);
   let y = box.y;
-  text(doc, tiled ? `Page map: ${plan.rows} x ${plan.cols} tiles` : "Sheet overview", box.x, y, { size: 12, bold: true });
+  const printed = plan.tiles.filter((t) => !t.blank).length;
+  const blankNote = printed < plan.tiles.length ? `, ${printed} printed (blank tiles are left out)` : "";
+  text(doc, tiled ? `Page map: ${plan.rows} x ${plan.cols} tiles${blankNote}` : "Sheet overview", box.x, y, { size: 12, bold: true });
   y += 18;
   const steps = tiled
     ? [
@@ -42,8 +44,14 @@ export function drawLegendPage(ctx: RenderCtx): void {
       const tx = ox + (t.x0 - layout.box.minX) * s, ty = y + (layout.box.maxY - t.yTop) * s;
       const w = Math.min(plan.contentWMm, layout.box.maxX - t.x0) * s;
       const h = Math.min(plan.contentHMm, t.yTop - layout.box.minY) * s;
-      doc.lineWidth(0.6).strokeColor("#1f2937").rect(tx, ty, w, h).stroke();
-      text(doc, t.name, tx + 3, ty + 3, { size: Math.max(5, Math.min(8, w / 8)), bold: true, color: "#1f2937" });
+      if (t.blank) {
+        doc.lineWidth(0.4).strokeColor("#9ca3af").dash(2, { space: 2 }).rect(tx, ty, w, h).stroke();
+        doc.undash();
+        text(doc, `${t.name} blank`, tx + 3, ty + 3, { size: Math.max(4.5, Math.min(7, w / 9)), color: "#9ca3af" });
+      } else {
+        doc.lineWidth(0.6).strokeColor("#1f2937").rect(tx, ty, w, h).stroke();
+        text(doc, t.name, tx + 3, ty + 3, { size: Math.max(5, Math.min(8, w / 8)), bold: true, color: "#1f2937" });
+      }
     }
   }
   y += layout.heightMm * s + 14;

@@ -47,6 +47,7 @@ export function drawTilePages(ctx: RenderCtx): void {
   const crosses = alignmentCrosses(ctx);
   const single = plan.rows * plan.cols === 1;
   for (const tile of plan.tiles) {
+    if (tile.blank) continue;
     const title = single
       ? "True-size pieces (one page)"
       : `Tile ${tile.name}: row ${tile.row} of ${plan.rows}, column ${tile.col} of ${plan.cols}`;
