@@ -16,7 +16,7 @@ import { closeSequelize, getSequelize } from "@/lib/db/sequelize";
 import { closeRateLimitStore } from "@/lib/rate-limit/default-store";
 import { Invitation, Membership, PasswordResetToken, User } from "@/models";
 import { call, errorOf } from "./support/call";
-import { createProjectIn, createShopWithRoles, createUser, ensureSchema, FIXTURE_PASSWORD, sessionCookie, uniqueEmail, type ShopFixture } from "./support/fixtures";
+import { cleanupFixtures, trackShop, createProjectIn, createShopWithRoles, createUser, ensureSchema, FIXTURE_PASSWORD, sessionCookie, uniqueEmail, type ShopFixture } from "./support/fixtures";
 import { latestMailTo, linkToken } from "./support/mailbox";
 
 let f: ShopFixture;
@@ -25,6 +25,7 @@ beforeAll(async () => {
   f = await createShopWithRoles();
 });
 afterAll(async () => {
+  await cleanupFixtures();
   await closeRateLimitStore();
   await closeSequelize();
 });
@@ -37,6 +38,7 @@ describe("sign-up", () => {
     const res = await call(signup.POST, "POST", "/api/account/signup", { json: { name: "Wren Tallow", email, password: "moth-wings-42", shopName: "Tallow Props" } });
     expect(res.status).toBe(201);
     const body = await res.json();
+    trackShop(body.shop.id);
     expect(body.user.email).toBe(email.toLowerCase());
     expect(body.shop.name).toBe("Tallow Props");
     const m = await Membership.findOne({ where: { userId: body.user.id, shopId: body.shop.id } });

@@ -6,7 +6,7 @@ import { readSessionToken } from "@/lib/auth/session-token";
 import { sessionCookieName } from "@/lib/auth/auth-config";
 import { closeSequelize } from "@/lib/db/sequelize";
 import { closeRateLimitStore } from "@/lib/rate-limit/default-store";
-import { createShopWithRoles, ensureSchema, sessionCookie, type ShopFixture } from "./support/fixtures";
+import { cleanupFixtures, createShopWithRoles, ensureSchema, sessionCookie, type ShopFixture } from "./support/fixtures";
 
 /** next-auth configuration: JWT claims after sign-in, shop switch through update(), cookie settings. */
 let a: ShopFixture;
@@ -17,6 +17,7 @@ beforeAll(async () => {
   b = await createShopWithRoles();
 });
 afterAll(async () => {
+  await cleanupFixtures();
   await closeRateLimitStore();
   await closeSequelize();
 });

@@ -3,7 +3,7 @@ import { closeSequelize } from "@/lib/db/sequelize";
 import { closeRateLimitStore } from "@/lib/rate-limit/default-store";
 import { DEFAULT_MAX_BODY_BYTES } from "@/lib/api/read-json-body";
 import { call, errorOf } from "./support/call";
-import { createShopWithRoles, ensureSchema, type ShopFixture } from "./support/fixtures";
+import { cleanupFixtures, createShopWithRoles, ensureSchema, type ShopFixture } from "./support/fixtures";
 import { PUBLIC_ROUTES, SESSION_ROUTES } from "./support/routes";
 
 /** Malformed JSON → 400, wrong fields → 422 naming the field, huge bodies → 413, ids that match nothing → 404. */
@@ -13,6 +13,7 @@ beforeAll(async () => {
   f = await createShopWithRoles();
 });
 afterAll(async () => {
+  await cleanupFixtures();
   await closeRateLimitStore();
   await closeSequelize();
 });

@@ -4,7 +4,7 @@ import { closeRateLimitStore } from "@/lib/rate-limit/default-store";
 import { ACTIONS, can } from "@/lib/permissions/permissions";
 import { ROLES, type Role } from "@/lib/permissions/roles";
 import { call, errorOf } from "./support/call";
-import { createShopWithRoles, ensureSchema, type ShopFixture } from "./support/fixtures";
+import { cleanupFixtures, createShopWithRoles, ensureSchema, type ShopFixture } from "./support/fixtures";
 import { PUBLIC_ROUTES, SESSION_ROUTES } from "./support/routes";
 
 /**
@@ -17,6 +17,7 @@ beforeAll(async () => {
   f = await createShopWithRoles();
 });
 afterAll(async () => {
+  await cleanupFixtures();
   await closeRateLimitStore();
   await closeSequelize();
 });

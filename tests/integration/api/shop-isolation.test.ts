@@ -41,6 +41,7 @@ beforeAll(async () => {
   })).id;
 });
 afterAll(async () => {
+  await Invitation.destroy({ where: { id: demoInvitationId } });
   await closeRateLimitStore();
   await closeSequelize();
 });

@@ -28,6 +28,7 @@ const password = "restart-test-password";
 
 describe("restart keeps data", () => {
   let pgData = "";
+  let fallbackRoot = "";
   let pgPort = 0;
   let redisOpts: Parameters<typeof startRedis>[0] | undefined;
 
@@ -35,12 +36,20 @@ describe("restart keeps data", () => {
     if (pgData) await stopPostgres(pgData).catch(() => undefined);
     if (redisOpts) await stopRedis(redisOpts).catch(() => undefined);
     fs.rmSync(dataDir, { recursive: true, force: true });
+    if (fallbackRoot) fs.rmSync(fallbackRoot, { recursive: true, force: true });
   });
 
   it("keeps a SQL row, a redis key and a BullMQ job across stop and start", async () => {
     pgPort = await freePort();
+    // mkdtemp makes the folder mode 700: as root, the postgres user cannot enter it, so the cluster must move to
+    // the fallback location (and say why).
     const location = await resolvePgLocation(dataDir, dataDir, "restart-test");
     pgData = location.pgData;
+    if (process.getuid?.() === 0) {
+      expect(location.fallbackReason).toContain(`cannot enter ${dataDir}`);
+      expect(pgData.startsWith("/var/lib/peelform/")).toBe(true);
+      fallbackRoot = path.dirname(path.dirname(pgData));
+    }
     const pgOpts = { pgData, port: pgPort, password, fsync: true };
     expect(await initCluster(pgOpts)).toBe(true);
     expect((await startPostgres(pgOpts)).alreadyRunning).toBe(false);

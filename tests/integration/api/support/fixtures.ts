@@ -1,4 +1,5 @@
 import { randomBytes } from "node:crypto";
+import { Op } from "sequelize";
 import { hashPassword } from "@/lib/auth/password";
 import { encodeSessionToken } from "@/lib/auth/session-token";
 import { sessionCookieName } from "@/lib/auth/auth-config";
@@ -9,7 +10,7 @@ import { Membership, Project, Shop, User } from "@/models";
 
 /**
  * Test data for the API tests, against the real PostgreSQL in DATABASE_URL (npm test's stack provides it; for a
- * local run export the same variables, see the report in the team notes). Every fixture uses fresh random names, so
+ * local run export the same variables, see tests/integration/api/README.md). Every fixture uses fresh random names, so
  * tests never depend on or disturb the demo data and can run against a database that already has rows.
  */
 
@@ -28,8 +29,27 @@ export function ensureSchema(): Promise<unknown> {
   return migrated;
 }
 
+/** Test e-mails all look like `t-<10 hex>-<label>@peelform.test`; cleanupFixtures() removes those accounts. */
 export function uniqueEmail(label: string): string {
   return `t-${randomBytes(5).toString("hex")}-${label}@peelform.test`;
+}
+
+const createdShops = new Set<string>();
+
+/** Registers a shop made by a test (e.g. through sign-up) for cleanupFixtures(). */
+export function trackShop(id: string): void {
+  createdShops.add(id);
+}
+
+/**
+ * Deletes what this test file created: its shops (memberships, projects and invitations cascade) and every test
+ * account (t-…@peelform.test; reset tokens and memberships cascade). The demo data is left alone.
+ */
+export async function cleanupFixtures(): Promise<void> {
+  getSequelize();
+  if (createdShops.size) await Shop.destroy({ where: { id: [...createdShops] } });
+  createdShops.clear();
+  await User.destroy({ where: { email: { [Op.like]: "t-__________-%@peelform.test" } } });
 }
 
 export async function createUser(label: string, name = `Test ${label}`): Promise<User> {
@@ -48,6 +68,7 @@ export interface ShopFixture {
 export async function createShopWithRoles(name = `Test shop ${randomBytes(3).toString("hex")}`): Promise<ShopFixture> {
   getSequelize();
   const shop = await Shop.create({ name });
+  trackShop(shop.id);
   const users = {} as Record<Role, User>;
   const memberships = {} as Record<Role, Membership>;
   const cookies = {} as Record<Role, string>;
