@@ -16,9 +16,8 @@ let bold: Buffer | null = null;
 /** JetBrains Mono Regular (400), latin subset, TrueType bytes. */
 export function jetbrainsMonoRegular(): Buffer {
   if (regular) return regular;
-  const fromCwd = path.join(process.cwd(), "lib", "fonts", "jetbrains-mono-latin-400-normal.ttf");
-  regular = fs.existsSync(fromCwd)
-    ? fs.readFileSync(fromCwd)
+  regular = fs.existsSync(path.join(process.cwd(), "lib", "fonts", "jetbrains-mono-latin-400-normal.ttf"))
+    ? fs.readFileSync(path.join(process.cwd(), "lib", "fonts", "jetbrains-mono-latin-400-normal.ttf"))
     : fs.readFileSync(new URL("./jetbrains-mono-latin-400-normal.ttf", import.meta.url));
   return regular;
 }
@@ -26,9 +25,8 @@ export function jetbrainsMonoRegular(): Buffer {
 /** JetBrains Mono Bold (700), latin subset, TrueType bytes. */
 export function jetbrainsMonoBold(): Buffer {
   if (bold) return bold;
-  const fromCwd = path.join(process.cwd(), "lib", "fonts", "jetbrains-mono-latin-700-normal.ttf");
-  bold = fs.existsSync(fromCwd)
-    ? fs.readFileSync(fromCwd)
+  bold = fs.existsSync(path.join(process.cwd(), "lib", "fonts", "jetbrains-mono-latin-700-normal.ttf"))
+    ? fs.readFileSync(path.join(process.cwd(), "lib", "fonts", "jetbrains-mono-latin-700-normal.ttf"))
     : fs.readFileSync(new URL("./jetbrains-mono-latin-700-normal.ttf", import.meta.url));
   return bold;
 }

@@ -11,8 +11,8 @@ import { buildCutList } from "./cut-list";
 import { summarizeStretch } from "./stretch-summary";
 import { findFoamMaterial } from "./materials";
 import { PAPER_SIZES } from "./paper-sizes";
-import { markBlankTiles, planTiles } from "./tiling";
-import { polygonMeetsBox } from "./polygon";
+import { markBlankTiles, planTiles, printedTiles } from "./tiling";
+import { polygonMeetsBox, type Box } from "./polygon";
 import { createdAtDate, validatePatternInput, validatePdfOptions, type PatternInput, type PatternPdfOptions } from "./pattern-input";
 import { createDoc } from "./pdf/pdf-doc";
 import type { RenderCtx } from "./pdf/render-context";
@@ -29,9 +29,17 @@ export function planPatternPdf(input: PatternInput, opts: PatternPdfOptions) {
   const material = findFoamMaterial(input.meta.material);
   const materialName = material ? material.name : input.meta.material;
   const layout = buildLayout(input.report, materialName, input.meta.thicknessMm);
-  const grid = planTiles({ left: layout.box.minX, top: layout.box.maxY, widthMm: layout.widthMm, heightMm: layout.heightMm }, opts.paper, overlapMm);
-  const plan = markBlankTiles(grid, (box) =>
-    layout.pieces.some((p) => p.box.minX <= box.maxX && p.box.maxX >= box.minX && p.box.minY <= box.maxY && p.box.maxY >= box.minY && polygonMeetsBox(p.outline, box)));
+  const sheet = { left: layout.box.minX, top: layout.box.maxY, widthMm: layout.widthMm, heightMm: layout.heightMm };
+  const meets = (box: Box) =>
+    layout.pieces.some((p) => p.box.minX <= box.maxX && p.box.maxX >= box.minX && p.box.minY <= box.maxY && p.box.maxY >= box.minY && polygonMeetsBox(p.outline, box));
+  // Orientation by printed pages: blank tiles are left out, so the grid size alone can mislead.
+  let plan = markBlankTiles(planTiles(sheet, opts.paper, overlapMm), meets);
+  if (opts.paper !== "full") {
+    for (const o of ["portrait", "landscape"] as const) {
+      const alt = markBlankTiles(planTiles(sheet, opts.paper, overlapMm, o), meets);
+      if (printedTiles(alt).length < printedTiles(plan).length) plan = alt;
+    }
+  }
   return { layout, plan, materialName, overlapMm };
 }
 

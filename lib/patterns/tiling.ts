@@ -65,12 +65,13 @@ function countAlong(lengthMm: number, contentMm: number, overlapMm: number): num
 
 /**
  * Plans the tiles of a sheet `widthMm × heightMm` whose top-left corner is (left, top) in layout mm.
- * Picks portrait or landscape, whichever needs fewer pages (portrait on a tie).
+ * Picks portrait or landscape, whichever needs fewer pages (portrait on a tie), unless `only` fixes it.
  */
 export function planTiles(
   sheet: { left: number; top: number; widthMm: number; heightMm: number },
   paper: PaperId,
   overlapMm: number,
+  only?: "portrait" | "landscape",
 ): TilePlan {
   const m = PAGE_MARGIN_PT;
   const reserved = 2 * m + KEY_STRIP_PT + KEY_GAP_PT;
@@ -93,7 +94,7 @@ export function planTiles(
     };
   } else {
     const size = PAPER_SIZES[paper];
-    for (const orientation of ["portrait", "landscape"] as const) {
+    for (const orientation of only ? [only] : (["portrait", "landscape"] as const)) {
       const widthPt = orientation === "portrait" ? size.widthPt : size.heightPt;
       const heightPt = orientation === "portrait" ? size.heightPt : size.widthPt;
       const contentWPt = widthPt - 2 * m;
