@@ -72,4 +72,12 @@ describe("pattern PDF text", () => {
     expect(flat).toContain("joinsB,bevel12°wideontop");
     expect(flat).toContain("joinsA,bevel12°wideunderneath");
   });
+
+  it("sets text without JetBrains Mono's programming ligatures (they garble '!=', '=>', '===')", async () => {
+    const name = "Crate -> Lid != Box => www ===";
+    const lig = input(manyPieces(2));
+    lig.meta.projectName = name;
+    const cover = pageTexts(await renderPatternPdf(lig, { paper: "letter" }), "ligatures")[0];
+    expect(cover).toContain(name);
+  });
 });
