@@ -114,7 +114,8 @@ export function route<
         return errorResponse(new AppError("CONFLICT", "This conflicts with an existing record. Reload and try again."));
       }
       const path = safePath(req.url);
-      console.error(`[api] 500 ${req.method} ${path}: ${err instanceof Error ? `${err.name}: ${err.message}` : String(err)}`);
+      const what = err instanceof Error ? `${err.name}: ${err.message}` : String(err);
+      console.error(`[api] 500 ${req.method} ${path}: ${what.replace(/\s*\n\s*/g, " | ")}`);
       return errorResponse(new AppError("INTERNAL", "Something went wrong on our side. Please try again."));
     }
   };
