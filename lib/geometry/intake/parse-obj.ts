@@ -1,8 +1,8 @@
 /**
  * Wavefront OBJ reader for polygon geometry: `v` and `f` statements. Texture and normal references (`v/vt/vn`,
  * `v//vn`), groups, smoothing groups, materials, comments and free-form statements are read past and ignored.
- * Polygons are split into a fan of triangles (corner 0 with each following edge), which is exact for the convex,
- * planar polygons that modelling tools write; concave n-gons should be triangulated by the exporter.
+ * Polygons are split into triangles that keep their orientation: convex ones as a fan from corner 0, concave ones by
+ * ear clipping (triangulate-polygon.ts). A polygon that refers to vertices defined later in the file is fanned.
  *
  * Source: Wavefront OBJ format, "Object Files (.obj)", Appendix B1 of the Advanced Visualizer manual: vertex indices
  * start at 1; a negative index counts back from the last vertex defined above the statement (-1 = that vertex);
@@ -13,6 +13,7 @@
 import { GeometryError } from "../errors";
 import { GrowableF64, GrowableU32 } from "./growable";
 import { scanFloat, scanInt, scanState, wordAt } from "./scan-number";
+import { triangulatePolygon } from "./triangulate-polygon";
 
 export interface ObjParseResult {
   /** #V×3 positions of every `v` statement, in file order (file units). */
@@ -180,17 +181,17 @@ export function parseObj(bytes: Uint8Array): ObjParseResult {
         );
       }
       polygonCount++;
-      const t = count - 2;
-      tri.reserve(3 * t);
-      const d = tri.data;
-      let w = tri.length;
-      const a = corners[0];
-      for (let k = 1; k + 1 < count; k++) {
-        d[w++] = a;
-        d[w++] = corners[k];
-        d[w++] = corners[k + 1];
+      if (count === 3) {
+        tri.reserve(3);
+        tri.data[tri.length++] = corners[0];
+        tri.data[tri.length++] = corners[1];
+        tri.data[tri.length++] = corners[2];
+      } else if (maxCorner(corners, count) < vertexCount) {
+        triangulatePolygon(pos.data, corners, count, tri);
+      } else {
+        // positions not read yet: fan (exact for convex polygons)
+        fanInto(corners, count, tri);
       }
-      tri.length = w;
       continue;
     }
 
@@ -247,6 +248,24 @@ function skipLine(bytes: Uint8Array, k: number, n: number): number {
     k++;
   }
   return k;
+}
+
+function maxCorner(corners: Uint32Array, count: number): number {
+  let m = 0;
+  for (let k = 0; k < count; k++) if (corners[k] > m) m = corners[k];
+  return m;
+}
+
+function fanInto(corners: Uint32Array, count: number, tri: GrowableU32): void {
+  tri.reserve(3 * (count - 2));
+  const d = tri.data;
+  let w = tri.length;
+  for (let k = 1; k + 1 < count; k++) {
+    d[w++] = corners[0];
+    d[w++] = corners[k];
+    d[w++] = corners[k + 1];
+  }
+  tri.length = w;
 }
 
 function isContinuation(bytes: Uint8Array, k: number, n: number): boolean {

@@ -22,12 +22,47 @@ describe("parseObj", () => {
     expect(Array.from(r.triangles)).toEqual([0, 1, 2, 1, 3, 2]);
   });
 
-  it("fan-triangulates quads and n-gons", () => {
-    const text = "v 0 0 0\nv 1 0 0\nv 1 1 0\nv 0 1 0\nv 2 0 0\nv 3 1 0\nv 2 2 0\nv 1.5 3 0\nv 1 2 0\nf 1 2 3 4\nf 5 6 7 8 9\n";
+  it("fan-triangulates convex quads and n-gons", () => {
+    const text = "v 0 0 0\nv 1 0 0\nv 1 1 0\nv 0 1 0\nv 2 0 0\nv 3 0 0\nv 3.5 1 0\nv 2.5 2 0\nv 1.5 1 0\nf 1 2 3 4\nf 5 6 7 8 9\n";
     const r = parseObj(utf8(text));
     expect(r.polygonCount).toBe(2);
     // quad → 2 triangles, pentagon → 3 (a polygon of n corners gives n − 2 triangles)
     expect(Array.from(r.triangles)).toEqual([0, 1, 2, 0, 2, 3, 4, 5, 6, 4, 6, 7, 4, 7, 8]);
+  });
+
+  it("ear-clips a concave polygon so no triangle leaves it or flips", () => {
+    // an L-shaped hexagon, counter-clockwise in z = 0; a fan from corner 0 would cover the notch
+    //  (0,2)-(1,2)
+    //    |     |
+    //    |   (1,1)-(2,1)
+    //    |           |
+    //  (0,0)-------(2,0)   written starting at the reflex-free corner (2,1), which fans badly
+    const text = "v 2 1 0\nv 1 1 0\nv 1 2 0\nv 0 2 0\nv 0 0 0\nv 2 0 0\nf 1 2 3 4 5 6\n";
+    const r = parseObj(utf8(text));
+    expect(r.triangles.length).toBe(12);
+    const p = r.positions;
+    let area = 0;
+    for (let k = 0; k < r.triangles.length; k += 3) {
+      const [a, b, c] = [r.triangles[k], r.triangles[k + 1], r.triangles[k + 2]];
+      const signed = ((p[3 * b] - p[3 * a]) * (p[3 * c + 1] - p[3 * a + 1]) - (p[3 * b + 1] - p[3 * a + 1]) * (p[3 * c] - p[3 * a])) / 2;
+      expect(signed).toBeGreaterThan(0); // same orientation as the polygon
+      area += signed;
+    }
+    expect(area).toBeCloseTo(3, 12); // the L covers 3 unit squares: triangles tile it without overlap
+  });
+
+  it("keeps the orientation of a concave polygon facing −z", () => {
+    const text = "v 2 1 0\nv 1 1 0\nv 1 2 0\nv 0 2 0\nv 0 0 0\nv 2 0 0\nf 6 5 4 3 2 1\n";
+    const r = parseObj(utf8(text));
+    const p = r.positions;
+    let area = 0;
+    for (let k = 0; k < r.triangles.length; k += 3) {
+      const [a, b, c] = [r.triangles[k], r.triangles[k + 1], r.triangles[k + 2]];
+      const signed = ((p[3 * b] - p[3 * a]) * (p[3 * c + 1] - p[3 * a + 1]) - (p[3 * b + 1] - p[3 * a + 1]) * (p[3 * c] - p[3 * a])) / 2;
+      expect(signed).toBeLessThan(0);
+      area += signed;
+    }
+    expect(area).toBeCloseTo(-3, 12);
   });
 
   it("ignores texture and normal references, groups, materials, comments and other statements", () => {
