@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { cube } from "@/lib/geometry/shapes/cube";
 import { foldedSheet } from "@/lib/geometry/shapes/folded-sheet";
+import { cylinderTube } from "@/lib/geometry/shapes/cylinder-tube";
 import { cutPieces } from "@/lib/geometry/topology/cut-pieces";
 import { dihedralAngles } from "@/lib/geometry/marks/dihedral-angles";
 import { seamEdgeFaces } from "@/lib/geometry/marks/seam-edge-faces";
@@ -107,6 +108,23 @@ describe("seam runs", () => {
       expect(runs.closed[0]).toBe(0);
       expect(runs.edgeStart[1]).toBe(4);
     }
+  });
+
+  it("a ring seam around a tube is one closed run between the two halves, starting at its smallest vertex", () => {
+    const N = 12, m = cylinderTube({ radius: 5, height: 4, segments: N, bands: 2 });
+    const ring: number[] = [];
+    for (let j = N - 1; j >= 0; j--) ring.push(N + j, N + ((j + 1) % N));
+    const seams = new Uint32Array(ring);
+    const pieces = cutPieces(m, seams);
+    expect(pieces.length).toBe(2);
+    const sef = seamEdgeFaces(m.triangles, m.positions.length / 3, seams);
+    const runs = buildSeamRuns(sef, pieceFaceIndex(pieces, m.triangles.length / 3).facePiece, m.positions.length / 3);
+    expect(runs.count).toBe(1);
+    expect(runs.closed[0]).toBe(1);
+    expect(runs.edgeStart[1]).toBe(N);
+    expect(new Set([runs.pieceL[0], runs.pieceR[0]])).toEqual(new Set([0, 1]));
+    const first = runs.forward[0] ? sef.a[runs.edges[0]] : sef.b[runs.edges[0]];
+    expect(first).toBe(N);
   });
 
   it("a run splits where a third seam branches off", () => {
