@@ -42,6 +42,8 @@ export interface RunMark {
 
 export interface LayoutPiece {
   label: string;
+  /** index of the piece in the report (palette colour index, shared with the assembly views) */
+  index: number;
   report: PieceReport;
   /** outline, mm, [x0, y0, x1, y1, …], counter-clockwise, not closed */
   outline: Float64Array;
@@ -119,7 +121,7 @@ function inwardSign(outline: Float64Array, x: number, y: number, tx: number, ty:
   return 1;
 }
 
-function layoutPiece(p: PieceReport, f: number, materialText: string, thicknessMm: number): LayoutPiece {
+function layoutPiece(p: PieceReport, index: number, f: number, materialText: string, thicknessMm: number): LayoutPiece {
   let outline = toMm(p.outline, f);
   if (polygonSignedArea(outline) < 0) {
     // Keep a consistent orientation for the area and the normals even if a report lists a piece clockwise.
@@ -186,7 +188,7 @@ function layoutPiece(p: PieceReport, f: number, materialText: string, thicknessM
   }
 
   return {
-    label: p.label, report: p, outline, box, areaMm2, perimeterMm,
+    label: p.label, index, report: p, outline, box, areaMm2, perimeterMm,
     labelX: lp.x, labelY: lp.y, labelSizeMm, infoSizeMm,
     infoLines: [cutCountText(p), `area ${formatArea(areaMm2)}`, `${materialText} ${formatLength(thicknessMm)}`],
     ticks, runs,
@@ -198,7 +200,7 @@ export function buildLayout(report: FlattenReport, materialText: string, thickne
   const f = MM_PER_UNIT[report.units];
   const pieces: LayoutPiece[] = [];
   const skipped: PatternLayout["skipped"] = [];
-  for (const p of report.pieces) {
+  for (const [index, p] of report.pieces.entries()) {
     if (!p.flattenable || p.outline.length < 3) {
       skipped.push({ piece: p, reason: p.problem ?? "it could not be flattened" });
       continue;
@@ -208,7 +210,7 @@ export function buildLayout(report: FlattenReport, materialText: string, thickne
       skipped.push({ piece: p, reason: twin ? `it is cut as the mirrored copy of ${twin} (see ${twin}: cut 2, one mirrored)` : "its count is 0" });
       continue;
     }
-    pieces.push(layoutPiece(p, f, materialText, thicknessMm));
+    pieces.push(layoutPiece(p, index, f, materialText, thicknessMm));
   }
   let minX = Infinity, minY = Infinity, maxX = -Infinity, maxY = -Infinity;
   for (const p of pieces) {

@@ -60,8 +60,12 @@ export const VIEWS: { name: ViewName; title: string; rows: [Vec3, Vec3, Vec3] }[
 
 const LIGHT: Vec3 = norm([-0.35, 0.55, 0.75]);
 
-/** Projects the mesh into the four views. */
-export function projectViews(mesh: SimpleMesh, labels: string[]): ProjectedView[] {
+/**
+ * Projects the mesh into the four views.
+ * @param labels      piece labels by piece index (facePiece values)
+ * @param colorIndex  palette index per piece index (default: the piece index), so views match the pattern sheet
+ */
+export function projectViews(mesh: SimpleMesh, labels: string[], colorIndex?: number[]): ProjectedView[] {
   const m = simplifyToBudget(mesh, VIEW_FACE_BUDGET);
   const nv = m.positions.length / 3;
   const nf = m.triangles.length / 3;
@@ -104,7 +108,7 @@ export function projectViews(mesh: SimpleMesh, labels: string[]): ProjectedView[
       const lambert = Math.abs((nx * LIGHT[0] + ny * LIGHT[1] + nz * LIGHT[2]) / nl);
       const shade = 0.45 + 0.55 * lambert;
       const piece = m.facePiece[f];
-      const base = piece >= 0 ? pieceColor(piece) : NO_PIECE_COLOR;
+      const base = piece >= 0 ? pieceColor(colorIndex?.[piece] ?? piece) : NO_PIECE_COLOR;
       colors[3 * k] = base[0] * shade; colors[3 * k + 1] = base[1] * shade; colors[3 * k + 2] = base[2] * shade;
       // nz > 0: the face is wound counter-clockwise as seen, i.e. it faces the viewer.
       if (piece >= 0 && nz > 0) {

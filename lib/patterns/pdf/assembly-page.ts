@@ -50,7 +50,9 @@ export function drawAssemblyPage(ctx: RenderCtx): void {
   y += 18;
   if (input.assembly) {
     const a = input.assembly;
-    const views = projectViews({ positions: a.positions, triangles: a.triangles, facePiece: a.facePiece }, a.labels);
+    const reportIndex = new Map(input.report.pieces.map((p, i) => [p.label, i]));
+    const colorIndex = a.labels.map((l, i) => reportIndex.get(l) ?? i);
+    const views = projectViews({ positions: a.positions, triangles: a.triangles, facePiece: a.facePiece }, a.labels, colorIndex);
     const cellW = box.w / 2, cellH = Math.min(box.h * 0.3, cellW * 0.9);
     views.forEach((v, i) => drawView(ctx, v, box.x + (i % 2) * cellW, y + Math.floor(i / 2) * cellH, cellW, cellH));
     y += 2 * cellH + 6;

@@ -52,11 +52,11 @@ function intersects(a: Box, b: Box): boolean {
  */
 export function drawSheet(doc: Doc, layout: PatternLayout, m: SheetMap, window: Box | null, detail: "true-size" | "overview"): void {
   const pad = 20;
-  layout.pieces.forEach((p, index) => {
+  layout.pieces.forEach((p) => {
     if (window && !intersects({ minX: p.box.minX - pad, minY: p.box.minY - pad, maxX: p.box.maxX + pad, maxY: p.box.maxY + pad }, window)) return;
     doc.save();
     outlinePath(doc, p, m);
-    doc.fillColor(tint(pieceColor(index), detail === "overview" ? 0.45 : 0.14)).fill();
+    doc.fillColor(tint(pieceColor(p.index), detail === "overview" ? 0.45 : 0.14)).fill();
     outlinePath(doc, p, m);
     doc.lineWidth(detail === "overview" ? 0.5 : CUT_LINE_PT).strokeColor("#000000").lineJoin("round").stroke();
     const lx = mapX(m, p.labelX), ly = mapY(m, p.labelY);
