@@ -12,16 +12,20 @@ import { closeRateLimitStore } from "@/lib/rate-limit/default-store";
 import { DEMO_SHOP, OUTSIDER_SHOP } from "@/seeders/demo-scenario";
 import { Invitation, Membership, Project, Shop, User } from "@/models";
 import { call, errorOf } from "./support/call";
-import { ensureSchema, sessionCookie } from "./support/fixtures";
+import { cleanupFixtures, createShopWithRoles, ensureSchema, sessionCookie, uniqueEmail, type ShopFixture } from "./support/fixtures";
 
-/** The outsider (owner of another shop, so every permission) must not reach anything of the demo shop: 404. */
+/**
+ * The outsider (owner of another shop, so every permission) must not reach anything of the demo shop: 404. The
+ * demo rows are only read (and the failed attempts must leave them unchanged).
+ */
 let outsiderCookie: string;
 let ownerCookie: string;
 let demoShop: Shop;
 let outsiderShop: Shop;
 let demoProjectIds: string[];
 let demoMembershipIds: string[];
-let demoInvitationId: string;
+let victim: ShopFixture;
+let victimInvitationId: string;
 
 beforeAll(async () => {
   await ensureSchema();
@@ -35,13 +39,16 @@ beforeAll(async () => {
   ownerCookie = await sessionCookie(owner, demoShop.id);
   demoProjectIds = (await Project.findAll({ where: { shopId: demoShop.id } })).map((p) => p.id);
   demoMembershipIds = (await Membership.findAll({ where: { shopId: demoShop.id } })).map((m) => m.id);
-  demoInvitationId = (await Invitation.create({
-    shopId: demoShop.id, invitedById: owner.id, email: `t-iso-${Date.now()}@peelform.test`, role: "designer",
+  // The demo shop stays read-only here (the e2e run uses it at the same time): the pending invitation to attack
+  // lives in a fresh shop.
+  victim = await createShopWithRoles();
+  victimInvitationId = (await Invitation.create({
+    shopId: victim.shop.id, invitedById: victim.users.owner.id, email: uniqueEmail("iso"), role: "designer",
     tokenHash: createLinkToken().tokenHash, expiresAt: new Date(Date.now() + 3_600_000),
   })).id;
 });
 afterAll(async () => {
-  await Invitation.destroy({ where: { id: demoInvitationId } });
+  await cleanupFixtures();
   await closeRateLimitStore();
   await closeSequelize();
 });
@@ -79,10 +86,12 @@ describe("shop isolation", () => {
     expect(await Membership.count({ where: { id: demoMembershipIds } })).toBe(demoMembershipIds.length);
   });
 
-  it("a demo invitation cannot be withdrawn by the outsider", async () => {
-    const res = await call(invitation.DELETE, "DELETE", "/api/shop/invitations/x", { cookie: outsiderCookie, params: { id: demoInvitationId } });
+  it("another shop's pending invitation cannot be withdrawn by the outsider", async () => {
+    const res = await call(invitation.DELETE, "DELETE", "/api/shop/invitations/x", { cookie: outsiderCookie, params: { id: victimInvitationId } });
     expect(res.status).toBe(404);
-    expect(await Invitation.count({ where: { id: demoInvitationId } })).toBe(1);
+    expect(await Invitation.count({ where: { id: victimInvitationId } })).toBe(1);
+    const listed = await (await call(members.GET, "GET", "/api/shop/members", { cookie: outsiderCookie })).json();
+    expect(listed.invitations.map((i: { id: string }) => i.id)).not.toContain(victimInvitationId);
   });
 
   it("the outsider cannot switch into the demo shop", async () => {
