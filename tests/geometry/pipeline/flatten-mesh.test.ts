@@ -5,6 +5,8 @@ import { GeometryError } from "@/lib/geometry/errors";
 import { cube } from "@/lib/geometry/shapes/cube";
 import { uvSphere } from "@/lib/geometry/shapes/uv-sphere";
 import { flatGrid } from "@/lib/geometry/shapes/flat-grid";
+import { readMesh } from "@/lib/geometry/intake/read-mesh";
+import { writeObj } from "@/lib/geometry/intake/write-mesh";
 import { intakeOf, seamedTube, transformed, treeCutCube } from "./fixtures";
 
 const polygonPerimeter = (r: number, n: number): number => 2 * n * r * Math.sin(Math.PI / n);
@@ -177,6 +179,17 @@ describe("flattenMesh warnings and options", () => {
     expect(strict.report.warnings.some((w) => w.startsWith("Piece A stretches"))).toBe(true);
     const loose = flattenMesh(intake, new Uint32Array(0), { stretchLimit: 5 });
     expect(loose.report.warnings.some((w) => w.startsWith("Piece A stretches"))).toBe(false);
+  });
+
+  it("warns when a decimated copy was flattened, and when the foam is thicker than a curve's radius", async () => {
+    const grid = flatGrid({ faces: 2000, size: 100, bump: 20 });
+    const intake = await readMesh(new TextEncoder().encode(writeObj(grid)), { units: "mm", faceBudget: 500 });
+    expect(intake.report.decimated).not.toBeNull();
+    const res = flattenMesh(intake, new Uint32Array(0), {});
+    expect(res.report.warnings[0]).toMatch(/over the budget of 500/);
+    const { mesh, seams } = seamedTube(5, 20, 32, 2);
+    const thick = flattenMesh(await intakeOf(mesh), seams, { thickness: 30 });
+    expect(thick.report.warnings.some((w) => w.includes("inside out"))).toBe(true);
   });
 
   it("a closed sphere without seams is reported as not flattenable", async () => {
