@@ -82,6 +82,23 @@ describe("tiling", () => {
     const overlapMm = landscapeW - stepMm;
     expect(Math.abs(overlapMm - 10)).toBeLessThan(0.01);
     expect(Math.abs(left[0].w / PT_PER_MM - 400)).toBeLessThan(0.1);
+
+    // Alignment crosses: circles of 3 mm radius in the shared band; each must print on both tiles at the same
+    // sheet position, i.e. shifted by exactly one step between the pages.
+    const circles = (page: (typeof tiles)[number]) =>
+      page.paths.filter((p) => p.paint === "S").flatMap((p) => p.subpaths).map(bbox)
+        .filter((b) => Math.abs(b.w / PT_PER_MM - 6) < 0.01 && Math.abs(b.h / PT_PER_MM - 6) < 0.01)
+        .map((b) => [(b.minX + b.maxX) / 2, (b.minY + b.maxY) / 2]);
+    const c1 = circles(tiles[0]), c2 = circles(tiles[1]);
+    expect(c1.length).toBeGreaterThanOrEqual(3);
+    expect(c2.length).toBe(c1.length);
+    for (const [x, y] of c1) {
+      expect(c2.some(([x2, y2]) => Math.abs(x - stepMm * PT_PER_MM - x2) < 0.01 && Math.abs(y - y2) < 0.01)).toBe(true);
+      // …and lie inside the overlap band of the first tile (the last 10 mm of its window).
+      const windowRight = PAGE_MARGIN_PT + landscapeW * PT_PER_MM;
+      expect(x).toBeGreaterThan(windowRight - 10 * PT_PER_MM);
+      expect(x).toBeLessThan(windowRight);
+    }
   });
 
   it("a layout larger than a page in both directions gets rows × columns tiles and a page map", async () => {

@@ -9,7 +9,7 @@ import path from "node:path";
 import { beforeAll, describe, expect, it } from "vitest";
 import { renderPatternPdf, planPatternPdf } from "@/lib/patterns/render-pattern-pdf";
 import { SAFETY_CAUTIONS, SAFETY_REMINDER } from "@/lib/safety/cautions";
-import { input, manyPieces, tubeAssembly } from "./fixtures";
+import { input, manyPieces, piece, tubeAssembly } from "./fixtures";
 
 const dir = mkdtempSync(path.join(tmpdir(), "peelform-pdf-"));
 
@@ -79,5 +79,18 @@ describe("pattern PDF text", () => {
     lig.meta.projectName = name;
     const cover = pageTexts(await renderPatternPdf(lig, { paper: "letter" }), "ligatures")[0];
     expect(cover).toContain(name);
+  });
+
+  it("has the cautions on the cover of every kind of pattern (full size, no mesh, nothing flattened)", async () => {
+    const nothing = piece("A", [], { flattenable: false, problem: "Piece A is a closed shell: paint a seam across it.", metrics: null });
+    const variants: [string, Parameters<typeof renderPatternPdf>[0], Parameters<typeof renderPatternPdf>[1]][] = [
+      ["full", input(manyPieces(4), { assembly: tubeAssembly(3) }), { paper: "full" }],
+      ["a4-no-mesh", input(manyPieces(4)), { paper: "a4" }],
+      ["nothing", input([nothing]), { paper: "tabloid" }],
+    ];
+    for (const [name, inp, opts] of variants) {
+      const cover = pageTexts(await renderPatternPdf(inp, opts), name)[0];
+      for (const c of SAFETY_CAUTIONS) for (const l of [c.title, ...c.lines]) expect(cover, name).toContain(l);
+    }
   });
 });
