@@ -215,6 +215,7 @@ export function flattenMesh(
     lengthFactor: cf,
     tickSpacing,
     letterInset: inset,
+    straightThresholdDeg: opts.straightBevelDeg,
   });
 
   // report

@@ -7,6 +7,7 @@ import { z } from "zod";
 import { GeometryError } from "../errors";
 import { LENGTH_UNITS, MM_PER_UNIT, type LengthUnit } from "../mesh";
 import { parseLengthIn } from "../units/parse-length";
+import { STRAIGHT_BEVEL_DEG } from "../marks/bevel-kind";
 
 const lengthInput = z.union([z.number().finite().nonnegative(), z.string().min(1)]);
 
@@ -44,7 +45,10 @@ export const flattenOptionsSchema = z
     /** width of the layout rows; default about square */
     sheetWidth: lengthInput.optional(),
     mirror: mirrorPlaneSchema.nullable().default(null),
-    /** warn when a piece stretches more than this (fraction, 0.05 = 5 %) */
+    /** seams whose bevel per side is under this many degrees are cut square (default STRAIGHT_BEVEL_DEG = 5) */
+    straightBevelDeg: z.number().min(0).max(45).default(STRAIGHT_BEVEL_DEG),
+    /** warn when a piece stretches or compresses more than this (fraction, 0.05 = 5 %).
+     * // Common practice: EVA foam takes a few percent of stretch when warmed and glued; more needs a dart. */
     stretchLimit: z.number().positive().max(10).default(0.05),
   })
   .strict()

@@ -33,6 +33,9 @@ describe("flattenMesh on a seamed cylinder", () => {
     expect(p.bevels.length).toBe(2);
     expect(new Set(p.bevels.map((b) => b.run)).size).toBe(1);
     expect(p.bevels.every((b) => b.neighbor === "A" && b.kind === "straight")).toBe(true);
+    // a 2.8° bevel counts as a ridge when the square-cut threshold is lowered below it
+    const strict = flattenMesh(await intakeOf(mesh), seams, { straightBevelDeg: 2 }).report.pieces[0];
+    expect(strict.bevels.every((b) => b.kind === "ridge")).toBe(true);
     // a 64-gon turns 360/64 = 5.625° per edge: outside dihedral 185.625°
     expect(p.bevels[0].dihedralDeg).toBeCloseTo(180 + 360 / N, 6);
     expect(p.ticks.length).toBe(8);
