@@ -18,14 +18,19 @@ export const resetRequestsByIp = new SlidingWindowLimiter("reset-ip", 20, 60 * M
 /** New shops: 10 per IP per hour. */
 export const signUpsByIp = new SlidingWindowLimiter("signup-ip", 10, 60 * MINUTE, defaultRateLimitStore);
 
-/** Client IP as told by the first proxy (x-forwarded-for), else x-real-ip, else "unknown". */
+/**
+ * Client IP for per-IP limits: the LAST x-forwarded-for entry, i.e. the address the nearest proxy saw (a reverse
+ * proxy appends the peer address; entries before it are whatever the client claimed). Next itself fills the header
+ * with the socket address when it is absent. Without a proxy in front a client can still send its own header, so
+ * per-IP limits are a second line; the per-e-mail limits do not depend on it.
+ */
 export function clientIp(headers: Headers | Record<string, string | string[] | undefined> | undefined): string {
   const get = (name: string): string | undefined => {
     if (!headers) return undefined;
     if (headers instanceof Headers) return headers.get(name) ?? undefined;
     const v = headers[name];
-    return Array.isArray(v) ? v[0] : v;
+    return Array.isArray(v) ? v[v.length - 1] : v;
   };
-  const forwarded = get("x-forwarded-for")?.split(",")[0]?.trim();
+  const forwarded = get("x-forwarded-for")?.split(",").pop()?.trim();
   return forwarded || get("x-real-ip")?.trim() || "unknown";
 }

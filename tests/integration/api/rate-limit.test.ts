@@ -2,6 +2,7 @@ import { randomBytes } from "node:crypto";
 import { afterAll, describe, expect, it } from "vitest";
 import type { Redis } from "ioredis";
 import { createRedis } from "@/lib/queue/connection";
+import { clientIp } from "@/lib/rate-limit/limits";
 import { MemoryRateLimitStore } from "@/lib/rate-limit/memory-store";
 import { RedisRateLimitStore } from "@/lib/rate-limit/redis-store";
 import { SlidingWindowLimiter } from "@/lib/rate-limit/sliding-window";
@@ -53,5 +54,15 @@ describe("redis store across processes", () => {
     expect((await lb.check("x")).count).toBe(3);
     await lb.record("x");
     expect((await la.check("x")).allowed).toBe(false);
+  });
+});
+
+describe("clientIp", () => {
+  it("takes the address the nearest proxy appended, then x-real-ip, else unknown", () => {
+    expect(clientIp(new Headers({ "x-forwarded-for": "203.0.113.9, 10.0.0.2" }))).toBe("10.0.0.2");
+    expect(clientIp({ "x-forwarded-for": "198.51.100.7" })).toBe("198.51.100.7");
+    expect(clientIp(new Headers({ "x-real-ip": "192.0.2.1" }))).toBe("192.0.2.1");
+    expect(clientIp(new Headers())).toBe("unknown");
+    expect(clientIp(undefined)).toBe("unknown");
   });
 });
