@@ -17,6 +17,8 @@ export interface ArapResult {
   /** ARAP energy at the start (LSCM input) and at exit, units² */
   initialEnergy: number;
   energy: number;
+  /** energy / Σ_t area_t: dimensionless, scale-free (reported as solver.residual) */
+  relativeEnergy: number;
   /** iterations whose step had to be shortened (or rejected) to avoid flipping triangles */
   backtracks: number;
   /** flipped triangles in the result (never more than in the input) */
@@ -41,7 +43,8 @@ export function countFlips(triangles: Uint32Array, uv: Float64Array): number {
  * atan2(S21 − S12, S11 + S22); always a proper rotation, never a reflection). Global step: L·u = b with the
  * cotan Laplacian, one vertex pinned, factorised once (nested dissection + LDLᵀ) and solved for u and v together.
  * Flip guard: a step that increases the number of flipped triangles is halved up to 6 times toward the previous
- * iterate; if it still flips, refinement stops at the previous iterate.
+ * iterate; if it still flips, refinement stops at the previous iterate (so the result never has more flipped
+ * triangles than the LSCM start). solver.residual is the final energy divided by the 3D area (scale-free).
  *
  * @param triangles #F×3
  * @param frames triangle frames (x_i in each triangle's plane) and cotangents
@@ -175,10 +178,14 @@ export function arapRefine(
     energy = e;
     if (change <= tol * before || e <= floor) { converged = true; break; }
   }
-  if (!converged) localStep(uv);
+  if (!converged) energy = localStep(uv);
+  let totalArea = 0;
+  for (let f = 0; f < nf; f++) totalArea += frames.area[f];
+  const relativeEnergy = totalArea > 0 ? energy / totalArea : 0;
   return {
     uv,
-    solver: { converged, iterations: it, residual: energy, ms: performance.now() - t0 },
+    relativeEnergy,
+    solver: { converged, iterations: it, residual: relativeEnergy, ms: performance.now() - t0 },
     initialEnergy,
     energy,
     backtracks,

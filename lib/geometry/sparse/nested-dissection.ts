@@ -40,6 +40,13 @@ export function nestedDissection(n: number, ptr: Uint32Array, adj: Uint32Array, 
     return qt;
   };
 
+  const useSplit = (verts: Int32Array, g: { a: Int32Array; b: Int32Array; s: Int32Array }): void => {
+    for (let i = 0; i < verts.length; i++) tag[verts[i]] = -1;
+    dissect(g.a);
+    dissect(g.b);
+    for (let i = 0; i < g.s.length; i++) perm[out++] = g.s[i];
+  };
+
   const dissect = (verts: Int32Array): void => {
     const m = verts.length;
     if (m <= LEAF) {
@@ -61,6 +68,12 @@ export function nestedDissection(n: number, ptr: Uint32Array, adj: Uint32Array, 
       for (let i = 0; i < r; i++) tag[rest[i]] = -1;
       dissect(comp);
       dissect(rest);
+      return;
+    }
+    // a coordinate split within the planar-separator bound (2√2·√m, Lipton & Tarjan 1979) is taken at once
+    const geo = coords ? coordinateSplit(verts, t) : null;
+    if (geo && geo.s.length <= 2.83 * Math.sqrt(m)) {
+      useSplit(verts, geo);
       return;
     }
     // pseudo-peripheral start: repeat BFS from the last vertex while the eccentricity grows (at most 4 sweeps)
@@ -99,15 +112,9 @@ export function nestedDissection(n: number, ptr: Uint32Array, adj: Uint32Array, 
         if (touchesFar) s.push(v); else a.push(v);
       }
     }
-    if (coords) {
-      const g = coordinateSplit(verts, t);
-      if (g && g.s.length < s.length) {
-        for (let i = 0; i < m; i++) tag[verts[i]] = -1;
-        dissect(g.a);
-        dissect(g.b);
-        for (let i = 0; i < g.s.length; i++) perm[out++] = g.s[i];
-        return;
-      }
+    if (geo && geo.s.length < s.length) {
+      useSplit(verts, geo);
+      return;
     }
     for (let i = 0; i < m; i++) tag[verts[i]] = -1;
     dissect(Int32Array.from(a));
