@@ -17,6 +17,10 @@ if (!modes.includes(mode)) {
   process.exit(2);
 }
 
+// When our output pipe closes (e.g. `npm start | tee log` and Ctrl-C ends tee), keep going: the shutdown that
+// follows must still stop every service, even with nobody left to read about it.
+for (const stream of [process.stdout, process.stderr]) stream.on("error", () => {});
+
 const t0 = Date.now();
 process.env.PEELFORM_STARTED_AT = String(t0);
 const clock = () => `[${((Date.now() - t0) / 1000).toFixed(1).padStart(6)}s]`;
