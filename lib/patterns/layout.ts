@@ -27,7 +27,16 @@ export interface Chevron {
   filled: boolean;
 }
 
-/** One seam run's annotation: the neighbour text, centred at (x, y), rotated by angleDeg (CCW, layout frame). */
+/** Where a run's text goes: centred at (x, y), rotated by angleDeg (counter-clockwise, layout frame), mm. */
+export interface RunLabel {
+  x: number; y: number;
+  angleDeg: number;
+}
+
+/**
+ * One seam run's annotation: the neighbour text ("joins B, bevel 20° wide on top"), repeated along long runs so
+ * every tile that shows part of the seam names the neighbour, and the bevel chevrons.
+ */
 export interface RunMark {
   run: number;
   neighbor: string;
@@ -35,10 +44,12 @@ export interface RunMark {
   opensTo: BevelRun["opensTo"];
   bevelDeg: number;
   text: string;
-  x: number; y: number;
-  angleDeg: number;
+  labels: RunLabel[];
   chevrons: Chevron[];
 }
+
+/** Longest stretch of seam with one copy of its text, mm (a bit under a Letter tile's width). */
+export const RUN_TEXT_REPEAT_MM = 160;
 
 export interface LayoutPiece {
   label: string;
@@ -155,10 +166,17 @@ function layoutPiece(p: PieceReport, index: number, f: number, materialText: str
     if (path.length < 4) continue;
     const L = polylineLength(path);
     if (!(L > 0)) continue;
-    const mid = pointAlongPolyline(path, L / 2);
-    const sgn = inwardSign(outline, mid.x, mid.y, mid.tx, mid.ty);
     const inset = Math.min(10, Math.max(3, clearance * 0.5));
-    const angle = upright((Math.atan2(mid.ty, mid.tx) * 180) / Math.PI);
+    const labels: RunLabel[] = [];
+    const copies = Math.max(1, Math.round(L / RUN_TEXT_REPEAT_MM));
+    for (let k = 0; k < copies; k++) {
+      const at = pointAlongPolyline(path, (L * (k + 0.5)) / copies);
+      const sgn = inwardSign(outline, at.x, at.y, at.tx, at.ty);
+      labels.push({
+        x: at.x - at.ty * sgn * inset, y: at.y + at.tx * sgn * inset,
+        angleDeg: upright((Math.atan2(at.ty, at.tx) * 180) / Math.PI),
+      });
+    }
     const text = `joins ${b.neighbor}, ${bevelText(b)}`;
     const chevrons: Chevron[] = [];
     if (b.kind !== "straight" && b.opensTo !== "none") {
@@ -181,10 +199,7 @@ function layoutPiece(p: PieceReport, index: number, f: number, materialText: str
         });
       }
     }
-    runs.push({
-      run: b.run, neighbor: b.neighbor, kind: b.kind, opensTo: b.opensTo, bevelDeg: b.bevelDeg, text,
-      x: mid.x - mid.ty * sgn * inset, y: mid.y + mid.tx * sgn * inset, angleDeg: angle, chevrons,
-    });
+    runs.push({ run: b.run, neighbor: b.neighbor, kind: b.kind, opensTo: b.opensTo, bevelDeg: b.bevelDeg, text, labels, chevrons });
   }
 
   return {

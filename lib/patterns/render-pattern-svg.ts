@@ -92,8 +92,8 @@ function pieceSvg(p: LayoutPiece, X: (x: number) => string, Y: (y: number) => st
     s.push(`<text x="${X(p.labelX)}" y="${Y(y)}" font-size="${n(p.infoSizeMm)}">${esc(l)}</text>`);
     y -= p.infoSizeMm * 1.25;
   }
-  for (const r of p.runs) {
-    s.push(`<text x="${X(r.x)}" y="${Y(r.y)}" font-size="${RUN_TEXT_SIZE_MM}" transform="rotate(${n(-r.angleDeg)} ${X(r.x)} ${Y(r.y)})" data-run="${r.run}">${esc(r.text)}</text>`);
+  for (const r of p.runs) for (const l of r.labels) {
+    s.push(`<text x="${X(l.x)}" y="${Y(l.y)}" font-size="${RUN_TEXT_SIZE_MM}" transform="rotate(${n(-l.angleDeg)} ${X(l.x)} ${Y(l.y)})" data-run="${r.run}">${esc(r.text)}</text>`);
   }
   s.push(`</g>`);
   s.push(`</g>`);

@@ -85,8 +85,18 @@ describe("piece annotations", () => {
       };
       expect(inside(p.labelX, p.labelY)).toBe(true);
       for (const t of p.ticks) expect(inside(t.x1, t.y1)).toBe(true);
-      for (const r of p.runs) expect(inside(r.x, r.y)).toBe(true);
+      for (const r of p.runs) for (const l of r.labels) expect(inside(l.x, l.y)).toBe(true);
       for (const r of p.runs) for (const c of r.chevrons) expect(inside(c.apexX, c.apexY)).toBe(true);
+    }
+  });
+
+  it("repeats the neighbour text along long seams (one copy per ~160 mm)", () => {
+    const long = cylinderStretchout({ radius: 10, height: 800 });
+    const layout = buildLayout(report([long]), "EVA foam", 6);
+    for (const r of layout.pieces[0].runs) {
+      expect(r.labels).toHaveLength(5);
+      const ys = r.labels.map((l) => l.y).sort((a, b) => a - b);
+      for (let i = 1; i < ys.length; i++) expect(ys[i] - ys[i - 1]).toBeCloseTo(160, 6);
     }
   });
 });

@@ -79,10 +79,12 @@ export function drawSheet(doc: Doc, layout: PatternLayout, m: SheetMap, window: 
         else doc.lineWidth(0.7).strokeColor(BEVEL_COLOR).stroke();
       }
       const bevelled = r.kind !== "straight" && r.opensTo !== "none";
-      text(doc, r.text, mapX(m, r.x), mapY(m, r.y), {
-        size: RUN_TEXT_SIZE_MM * PT_PER_MM, align: "center", valign: "middle", rotate: r.angleDeg,
-        color: bevelled ? BEVEL_COLOR : SEAM_TEXT_COLOR,
-      });
+      for (const l of r.labels) {
+        text(doc, r.text, mapX(m, l.x), mapY(m, l.y), {
+          size: RUN_TEXT_SIZE_MM * PT_PER_MM, align: "center", valign: "middle", rotate: l.angleDeg,
+          color: bevelled ? BEVEL_COLOR : SEAM_TEXT_COLOR,
+        });
+      }
     }
     // Label block: letter, then count / area / foam lines.
     const labelPt = p.labelSizeMm * PT_PER_MM;
