@@ -136,7 +136,7 @@ export function flattenMesh(
       continue;
     }
     try {
-      const flat = flattenPiece(p);
+      const flat = flattenPiece(p, { refine: opts.refine });
       orientCounterClockwise(flat.uv, p.triangles);
       flats.push(flat);
       problems.push(null);

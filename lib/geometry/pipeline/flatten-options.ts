@@ -45,6 +45,8 @@ export const flattenOptionsSchema = z
     /** width of the layout rows; default about square */
     sheetWidth: lengthInput.optional(),
     mirror: mirrorPlaneSchema.nullable().default(null),
+    /** run the length-preserving refinement after the conformal map (false: a quicker conformal-only preview) */
+    refine: z.boolean().default(true),
     /** seams whose bevel per side is under this many degrees are cut square (default STRAIGHT_BEVEL_DEG = 5) */
     straightBevelDeg: z.number().min(0).max(45).default(STRAIGHT_BEVEL_DEG),
     /** warn when a piece stretches or compresses more than this (fraction, 0.05 = 5 %).

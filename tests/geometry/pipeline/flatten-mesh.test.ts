@@ -210,6 +210,13 @@ describe("flattenMesh warnings and options", () => {
     expect(parseFlattenOptions({})).toMatchObject({ scanFace: "outer", k: 0.5, thickness: 0, mirror: null, stretchLimit: 0.05 });
   });
 
+  it("refine: false gives the conformal map only", async () => {
+    const bump = flatGrid({ faces: 400, size: 100, bump: 30 });
+    const p = flattenMesh(await intakeOf(bump), new Uint32Array(0), { refine: false }).report.pieces[0];
+    expect(p.solver.refine!.iterations).toBe(0);
+    expect(p.metrics).toEqual(p.lscmMetrics);
+  });
+
   it("reports progress per piece and ends at 1", async () => {
     const { mesh, seams } = treeCutCube(10, 2);
     const steps: [string, number][] = [];
