@@ -5,6 +5,7 @@
  */
 import { renderPatternPdf, planPatternPdf } from "@/lib/patterns/render-pattern-pdf";
 import { renderPatternSvg } from "@/lib/patterns/render-pattern-svg";
+import { projectViews } from "@/lib/patterns/assembly/project-views";
 import { input, manyPieces, tubeAssembly } from "@/tests/patterns/fixtures";
 
 /** Same shape as the shared bench row (declared here until scripts/bench.ts exports one). */
@@ -45,6 +46,10 @@ export async function run(): Promise<BenchRow[]> {
     svg = renderPatternSvg(inp);
     svgTimes.push(performance.now() - t);
   }
+  const scan = tubeAssembly(12, 500, 100); // 100 000 faces, as a large scan would bring
+  t = performance.now();
+  projectViews(scan, scan.labels);
+  const viewsMs = performance.now() - t;
   const warm = median(times);
   const svgMs = median(svgTimes);
   return [
@@ -55,5 +60,6 @@ export async function run(): Promise<BenchRow[]> {
     { name: "documents: 50-piece tiled Letter PDF, tiles printed", value: plan.tiles.filter((x) => !x.blank).length, unit: `of ${plan.rows} x ${plan.cols}` },
     { name: "documents: 50-piece SVG, median of 3", value: Math.round(svgMs * 10) / 10, unit: "ms", target: TARGET_MS, pass: svgMs < TARGET_MS },
     { name: "documents: 50-piece SVG, size", value: Math.round(Buffer.byteLength(svg) / 1024), unit: "KiB" },
+    { name: "documents: assembly views of a 100k-face mesh", value: Math.round(viewsMs), unit: "ms", target: 1000, pass: viewsMs < 1000 },
   ];
 }

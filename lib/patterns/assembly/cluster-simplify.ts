@@ -66,14 +66,24 @@ export function clusterSimplify(mesh: SimpleMesh, grid: number): SimpleMesh {
   const nf = triangles.length / 3;
   const tri: number[] = [];
   const fp: number[] = [];
-  const seen = new Set<string>();
+  // Drop faces that collapse onto the same three cells. Numeric keys while cells³ fits a double exactly.
+  const cells = counts.length;
+  const numeric = cells * cells * cells < Number.MAX_SAFE_INTEGER;
+  const seenNum = new Set<number>();
+  const seenStr = new Set<string>();
   for (let f = 0; f < nf; f++) {
     const a = cellOf[triangles[3 * f]], b = cellOf[triangles[3 * f + 1]], c = cellOf[triangles[3 * f + 2]];
     if (a === b || b === c || a === c) continue;
-    const s = [a, b, c].sort((p, q) => p - q);
-    const key = `${s[0]},${s[1]},${s[2]}`;
-    if (seen.has(key)) continue;
-    seen.add(key);
+    const lo = Math.min(a, b, c), hi = Math.max(a, b, c), mid = a + b + c - lo - hi;
+    if (numeric) {
+      const key = (lo * cells + mid) * cells + hi;
+      if (seenNum.has(key)) continue;
+      seenNum.add(key);
+    } else {
+      const key = `${lo},${mid},${hi}`;
+      if (seenStr.has(key)) continue;
+      seenStr.add(key);
+    }
     tri.push(a, b, c);
     fp.push(facePiece[f]);
   }
