@@ -8,6 +8,8 @@ export interface ArapOptions {
   maxIterations?: number;
   /** stop when |E_prev − E| ≤ tolerance·E_prev; default 1e−5 */
   tolerance?: number;
+  /** reject or shorten steps that flip triangles; default true (false only to measure what the guard prevents) */
+  flipGuard?: boolean;
 }
 
 export interface ArapResult {
@@ -168,7 +170,7 @@ export function arapRefine(
         for (let d = 0; d < 2 * nv; d++) cand[d] = prev[d] + 0.5 * (cand[d] - prev[d]);
       }
       const fl = countFlips(triangles, cand);
-      if (fl <= flips) { flips = fl; accepted = true; break; }
+      if (fl <= flips || opts.flipGuard === false) { flips = fl; accepted = true; break; }
     }
     if (!accepted) { uv.set(prev); break; }
     uv.set(cand);
