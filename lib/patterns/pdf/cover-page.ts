@@ -4,7 +4,7 @@
  */
 import { SAFETY_CAUTIONS } from "@/lib/safety/cautions";
 import { PAPER_SIZES } from "../paper-sizes";
-import { formatArea, formatDate, formatLength, formatPercent } from "../format";
+import { formatArea, formatDate, formatLength, formatLengthWithInches, formatPercent } from "../format";
 import { cutCountText, mirrorOfLabel } from "../layout";
 import { text, wrap } from "./pdf-doc";
 import { addPage, type RenderCtx } from "./render-context";
@@ -21,7 +21,7 @@ export function drawCoverPage(ctx: RenderCtx): void {
   y += 4;
 
   const f = layout.mmPerUnit;
-  const target = report.scale.targetWidth != null ? `, target width ${formatLength(report.scale.targetWidth * f)}` : "";
+  const target = report.scale.targetWidth != null ? `, target width ${formatLengthWithInches(report.scale.targetWidth * f)}` : "";
   const paperText = plan.paper === "full"
     ? "one full-size page (plotter or projector)"
     : `${PAPER_SIZES[plan.paper].name} ${plan.orientation}, ${plan.rows} x ${plan.cols} tiles (${plan.tiles.filter((t) => !t.blank).length} printed), ${plan.overlapMm} mm overlap`;
@@ -35,7 +35,7 @@ export function drawCoverPage(ctx: RenderCtx): void {
     ["Flattened", surface],
     ["Date", formatDate(ctx.createdAt)],
     ["Pieces", `${layout.pieces.length} shapes, ${cutList.totalPieces} to cut, ${formatArea(cutList.totalAreaMm2)} of foam before waste`],
-    ["Sheet", `${formatLength(layout.widthMm)} x ${formatLength(layout.heightMm)}`],
+    ["Sheet", `${formatLengthWithInches(layout.widthMm)} x ${formatLengthWithInches(layout.heightMm)}`],
     ["Paper", paperText],
   ];
   for (const [k, v] of kv) {
