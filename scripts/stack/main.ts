@@ -112,6 +112,9 @@ async function bringUp(mode: Mode, profile: Profile, cleanups: Cleanup[]): Promi
   const lockId = createHash("sha256").update(profile.dataDir).digest("hex").slice(0, 12);
   const lock = lockOrFail(path.join(root, "node_modules", ".cache", "peelform", `stack-${lockId}.lock`), `the data folder ${profile.dataDir}`);
   cleanups.push({ name: "lock", fn: async () => lock.release() });
+  const runDir = path.join(profile.dataDir, "run");
+  // A web app or worker left by a run that was killed outright would keep its port and serve an old build.
+  for (const name of ["web", "worker"]) await killLeftover(runDir, name, root);
 
   await step("Debian packages", () => ensureDebianPackages(mode === "start" || mode === "dev" ? START_PACKAGES : TEST_PACKAGES));
 
@@ -155,12 +158,10 @@ async function bringUp(mode: Mode, profile: Profile, cleanups: Cleanup[]): Promi
 
   if (mode !== "dev") await step("build", () => buildIfStale(root, childEnv(env)));
 
-  const runDir = path.join(profile.dataDir, "run");
   const logDir = path.join(profile.dataDir, "logs");
   fs.mkdirSync(logDir, { recursive: true });
   const output = (name: string) => (profile.fresh ? path.join(logDir, `${name}.log`) : "console");
   const { web, worker } = await step("web app and worker", async () => {
-    for (const name of ["web", "worker"]) killLeftover(runDir, name, root);
     await assertPortFree(profile.ports.web, "the web app", profile.fresh ? "TEST_PORT" : "PORT");
     const nextBin = path.join(root, "node_modules", ".bin", "next");
     const web = supervise({
@@ -221,7 +222,6 @@ async function wipeTestData(profile: Profile): Promise<void> {
     const { secrets } = loadOrCreateSecrets(profile.dataDir);
     if (await stopRedis({ port: profile.ports.redis, password: secrets.redisPassword, persistent: false })) info("  stopped a test redis left running");
   }
-  for (const name of ["web", "worker"]) killLeftover(path.join(profile.dataDir, "run"), name, profile.root);
   fs.rmSync(profile.dataDir, { recursive: true, force: true });
   if (location.fallbackReason) fs.rmSync(path.dirname(location.pgData), { recursive: true, force: true });
 }

@@ -34,8 +34,8 @@ function pidFile(runDir: string, name: string): string {
   return path.join(runDir, `${name}.pid`);
 }
 
-/** Ends a leftover child of an earlier run (same repository as cwd), found through its pid file. */
-export function killLeftover(runDir: string, name: string, root: string): void {
+/** Ends a leftover child of an earlier run (same repository as cwd), found through its pid file, and waits for it. */
+export async function killLeftover(runDir: string, name: string, root: string): Promise<void> {
   const file = pidFile(runDir, name);
   if (!fs.existsSync(file)) return;
   const pid = Number(fs.readFileSync(file, "utf8").trim());
@@ -58,6 +58,9 @@ export function killLeftover(runDir: string, name: string, root: string): void {
       // gone meanwhile
     }
   }
+  // Its port is free only once the process is gone.
+  const deadline = Date.now() + 10_000;
+  while (fs.existsSync(`/proc/${pid}`) && Date.now() < deadline) await new Promise((r) => setTimeout(r, 50));
 }
 
 function pipeLines(stream: NodeJS.ReadableStream | null, prefix: string, sink: (line: string) => void): void {
