@@ -81,6 +81,7 @@ export function parseFlattenOptions(input: unknown): FlattenOptions {
 /** A length option (number in `units`, or a string with its own unit) in `units`. */
 export function resolveLength(value: number | string | undefined, units: LengthUnit, what: string, fallbackMm?: number): number | undefined {
   if (value === undefined) return fallbackMm === undefined ? undefined : fallbackMm / MM_PER_UNIT[units];
-  if (typeof value === "number") return value;
-  return parseLengthIn(value, units, what);
+  const v = typeof value === "number" ? value : parseLengthIn(value, units, what);
+  if (!(v >= 0) || !Number.isFinite(v)) throw new GeometryError("BAD_PARAMETER", `The ${what} must be a length of zero or more (got ${String(value)}).`);
+  return v;
 }

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { flattenMesh } from "@/lib/geometry/pipeline/flatten-mesh";
-import { parseFlattenOptions } from "@/lib/geometry/pipeline/flatten-options";
+import { parseFlattenOptions, resolveLength } from "@/lib/geometry/pipeline/flatten-options";
 import { GeometryError } from "@/lib/geometry/errors";
 import { cube } from "@/lib/geometry/shapes/cube";
 import { uvSphere } from "@/lib/geometry/shapes/uv-sphere";
@@ -207,6 +207,9 @@ describe("flattenMesh warnings and options", () => {
     expect(() => parseFlattenOptions({ scale: 2, targetWidth: 3 })).toThrow(/targetWidth/);
     expect(() => parseFlattenOptions({ k: 2 })).toThrow(/Flatten option k/);
     expect(() => parseFlattenOptions({ colour: "red" })).toThrow(/options|colour/);
+    expect(() => resolveLength("-6mm", "mm", "thickness")).toThrow(/thickness must be a length of zero or more/);
+    expect(resolveLength("0.25in", "mm", "thickness")).toBeCloseTo(6.35, 12);
+    expect(resolveLength(undefined, "in", "tick spacing", 50.8)).toBeCloseTo(2, 12);
     expect(parseFlattenOptions({})).toMatchObject({ scanFace: "outer", k: 0.5, thickness: 0, mirror: null, stretchLimit: 0.05 });
   });
 
