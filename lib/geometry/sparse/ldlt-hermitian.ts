@@ -77,6 +77,7 @@ export function factorHermitian(h: HermitianCsr, perm?: Uint32Array): HermitianF
   const yr = new Float64Array(n);
   const yi = new Float64Array(n);
   const pattern = new Int32Array(n);
+  const colComplex = new Uint8Array(n);
   let maxDiag = 0;
   for (let k = 0; k < n; k++) {
     let top = n;
@@ -98,16 +99,30 @@ export function factorHermitian(h: HermitianCsr, perm?: Uint32Array): HermitianF
       const wr = yr[i], wi = yi[i];
       yr[i] = 0; yi[i] = 0;
       const p2 = lp[i] + lnz[i];
-      for (let q = lp[i]; q < p2; q++) {
-        const r = li[q], ar = lr[q], ai = lim[q];
-        yr[r] -= ar * wr - ai * wi;
-        yi[r] -= ar * wi + ai * wr;
+      if (colComplex[i] === 0) {
+        // column i of L is real so far (most columns below the boundary-free parts of the tree): cheaper update
+        if (wi === 0) {
+          for (let q = lp[i]; q < p2; q++) yr[li[q]] -= lr[q] * wr;
+        } else {
+          for (let q = lp[i]; q < p2; q++) {
+            const r = li[q], ar = lr[q];
+            yr[r] -= ar * wr;
+            yi[r] -= ar * wi;
+          }
+        }
+      } else {
+        for (let q = lp[i]; q < p2; q++) {
+          const r = li[q], ar = lr[q], ai = lim[q];
+          yr[r] -= ar * wr - ai * wi;
+          yi[r] -= ar * wi + ai * wr;
+        }
       }
       const di = d[i];
       // L_ki = conj(w_i) / D_i; D_k −= |w_i|² / D_i
       li[p2] = k;
       lr[p2] = wr / di;
       lim[p2] = -wi / di;
+      if (wi !== 0) colComplex[i] = 1;
       dk -= (wr * wr + wi * wi) / di;
       lnz[i]++;
     }

@@ -4,6 +4,7 @@ import { factorLdlt, solveLdlt, solveLdltPair } from "@/lib/geometry/sparse/ldlt
 import { nestedDissection } from "@/lib/geometry/sparse/nested-dissection";
 import { solveSpd } from "@/lib/geometry/sparse/solve-spd";
 import { csrFromTriplets, TripletList } from "@/lib/geometry/sparse/triplets";
+import { factorHermitian, hermitianMatVec, solveHermitianRefined } from "@/lib/geometry/sparse/ldlt-hermitian";
 
 /** 2D grid Laplacian (5-point) plus `shift` on the diagonal: SPD for shift > 0. */
 function gridLaplacian(k: number, shift: number) {
@@ -73,5 +74,46 @@ describe("nested dissection + LDLᵀ", () => {
   it("refuses a matrix that is not positive definite", () => {
     const a = gridLaplacian(5, 0); // singular: constants are in the null space
     expect(() => factorLdlt(a)).toThrow(/not positive definite/);
+  });
+});
+
+describe("Hermitian LDLᴴ", () => {
+  it("agrees with the real 2n×2n form [[Hr, −Hi], [Hi, Hr]] solved by LDLᵀ, with a small residual", () => {
+    const k = 20, n = k * k;
+    const re = gridLaplacian(k, 0.05);
+    const im = new Float64Array(re.values.length);
+    // antisymmetric imaginary part on the edges of the first grid row and column (like LSCM's boundary term)
+    for (let i = 0; i < n; i++) {
+      for (let q = re.rowPtr[i]; q < re.rowPtr[i + 1]; q++) {
+        const j = re.colIdx[q];
+        const onEdge = (i < k && j < k) || (i % k === 0 && j % k === 0);
+        if (onEdge && i !== j) im[q] = i < j ? 0.4 : -0.4;
+      }
+    }
+    const h = { re, im };
+    const perm = nestedDissection(n, re.rowPtr, re.colIdx);
+    const f = factorHermitian(h, perm);
+    const br = Float64Array.from({ length: n }, (_, i) => Math.cos(0.3 * i));
+    const bi = Float64Array.from({ length: n }, (_, i) => Math.sin(0.7 * i) - 0.2);
+    const zr = new Float64Array(n), zi = new Float64Array(n);
+    const stats = solveHermitianRefined(h, f, br, bi, zr, zi, 1e-12);
+    expect(stats.converged).toBe(true);
+    expect(stats.residual).toBeLessThan(1e-12);
+    const yr = new Float64Array(n), yi = new Float64Array(n);
+    hermitianMatVec(h, zr, zi, yr, yi);
+    for (let i = 0; i < n; i++) { expect(yr[i]).toBeCloseTo(br[i], 9); expect(yi[i]).toBeCloseTo(bi[i], 9); }
+    // real form
+    const t = new TripletList(4 * re.values.length);
+    for (let i = 0; i < n; i++) for (let q = re.rowPtr[i]; q < re.rowPtr[i + 1]; q++) {
+      const j = re.colIdx[q];
+      t.add(i, j, re.values[q]); t.add(n + i, n + j, re.values[q]);
+      if (im[q] !== 0) { t.add(i, n + j, -im[q]); t.add(n + i, j, im[q]); }
+    }
+    const big = csrFromTriplets(2 * n, t);
+    expect(asymmetry(big)).toBe(0);
+    const x = new Float64Array(2 * n), b = new Float64Array(2 * n);
+    b.set(br); b.set(bi, n);
+    solveSpd(big, factorLdlt(big), b, x, 1e-12);
+    for (let i = 0; i < n; i++) { expect(zr[i]).toBeCloseTo(x[i], 9); expect(zi[i]).toBeCloseTo(x[n + i], 9); }
   });
 });
