@@ -16,6 +16,7 @@
  *         <g id="{label}-labels" class="labels">…</g>            letter, count/area/foam, seam texts
  *       </g>
  *     </g>
+ *     <g id="notes" class="notes">  project line and the safety cautions, in a band below the sheet (never cut)
  *   </svg>
  * Labels are `<text>` in JetBrains Mono (monospace fallback); cutters usually ignore or engrave text.
  */
@@ -44,7 +45,15 @@ export function renderPatternSvg(input: PatternInput): string {
   const { minX, maxY } = layout.box;
   const X = (x: number) => n(x - minX);
   const Y = (y: number) => n(maxY - y);
-  const W = n(layout.widthMm), H = n(layout.heightMm);
+  // Notes band under the sheet: project line plus the cautions, sized to fit the sheet's width.
+  const noteLines = [
+    `${meta.projectName} - ${meta.scanName} - ${materialName} ${meta.thicknessMm} mm - true size, millimetres`,
+    ...SAFETY_CAUTIONS.flatMap((c) => [`${c.title.toUpperCase()}:`, ...c.lines]),
+  ];
+  const longest = Math.max(...noteLines.map((l) => [...l].length));
+  const noteSize = Math.min(2.5, (layout.widthMm - 4) / (longest * 0.6));
+  const notesH = noteLines.length * noteSize * 1.35 + 4;
+  const W = n(layout.widthMm), H = n(layout.heightMm + notesH);
   const out: string[] = [];
   out.push(`<?xml version="1.0" encoding="UTF-8"?>`);
   out.push(`<svg xmlns="http://www.w3.org/2000/svg" version="1.1" width="${W}mm" height="${H}mm" viewBox="0 0 ${W} ${H}" font-family="JetBrains Mono, monospace">`);
@@ -57,6 +66,11 @@ export function renderPatternSvg(input: PatternInput): string {
   out.push(`<desc>${esc(desc.join("\n"))}</desc>`);
   out.push(`<g id="pieces">`);
   for (const p of layout.pieces) out.push(pieceSvg(p, X, Y));
+  out.push(`</g>`);
+  out.push(`<g id="notes" class="notes" fill="#7f1d1d" font-size="${n(noteSize)}">`);
+  noteLines.forEach((l, i) => {
+    out.push(`<text x="2" y="${n(layout.heightMm + 2 + (i + 0.8) * noteSize * 1.35)}">${esc(l)}</text>`);
+  });
   out.push(`</g>`);
   out.push(`</svg>`);
   return out.join("\n") + "\n";

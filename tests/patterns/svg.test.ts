@@ -47,11 +47,19 @@ describe("renderPatternSvg", () => {
     expect(svg).toContain("joins B, bevel");
   });
 
-  it("carries the safety cautions in its description and escapes text", () => {
+  it("shows the safety cautions in a notes band below the sheet, and in its description; escapes text", () => {
     const inp = input(manyPieces(2));
     inp.meta.projectName = "Rock & <Roll>";
     const svg = renderPatternSvg(inp);
     expect(svg).toContain("Rock &amp; &lt;Roll&gt;");
-    for (const c of SAFETY_CAUTIONS) expect(svg).toContain(c.title);
+    const notes = svg.slice(svg.indexOf('<g id="notes"'));
+    for (const c of SAFETY_CAUTIONS) {
+      expect(svg.slice(svg.indexOf("<desc>"), svg.indexOf("</desc>"))).toContain(c.title);
+      for (const l of c.lines) expect(notes).toContain(`>${l.replace(/&/g, "&amp;")}</text>`);
+    }
+    // The notes lie below every piece: the band starts where the sheet ends.
+    const noteY = [...notes.matchAll(/<text x="2" y="([\d.]+)"/g)].map((m) => Number(m[1]));
+    const sheetH = Math.max(...[...svg.matchAll(/class="outline cut" d="([^"]+)"/g)].flatMap((m) => [...m[1].matchAll(/[ML][-\d.]+ ([-\d.]+)/g)].map((q) => Number(q[1]))));
+    expect(Math.min(...noteY)).toBeGreaterThan(sheetH);
   });
 });
