@@ -9,6 +9,15 @@
  *   numbered in order of first appearance (facet 1 corner 1, corner 2, …). `inputToWorking` is the identity over it.
  * - Decimation keeps the index space: collapsed vertices stay as unreferenced entries.
  * Coordinates are not converted: they stay in the declared `units`.
+ *
+ * Report counts per format: `inputVertices` = `v` statements (OBJ) or 3 corners per facet (STL); `inputFaces` =
+ * `f` statements (OBJ polygons) or facets (STL); `faces` = triangles after welding and cleaning; `weldedVertices` =
+ * referenced OBJ vertices merged into an earlier one, or STL corners merged into an earlier corner (3·facets −
+ * distinct vertices). Topology counts (components, loops, χ) describe the welded, cleaned mesh before decimation;
+ * `decimated` describes the working copy when one was made.
+ *
+ * Order of work: detect format → parse → weld (tolerance WELD_TOLERANCE_FACTOR × bounding-box diagonal of the
+ * referenced vertices) → drop degenerate and duplicate faces → topology → decimate when over the face budget.
  */
 import { GeometryError } from "../errors";
 import { LENGTH_UNITS, type LengthUnit, type TriMesh } from "../mesh";
@@ -63,6 +72,7 @@ export async function readMesh(bytes: Uint8Array, opts: ReadMeshOptions): Promis
   let inputFaces: number;
   let weldedVertices: number;
   let tolerance: number;
+  let inputBounds: Bounds;
 
   if (format === "obj") {
     const obj = parseObj(bytes);
@@ -75,7 +85,8 @@ export async function readMesh(bytes: Uint8Array, opts: ReadMeshOptions): Promis
     inputFaces = obj.polygonCount;
     const referenced = new Uint8Array(obj.vertexCount);
     for (let k = 0; k < triangles.length; k++) referenced[triangles[k]] = 1;
-    tolerance = WELD_TOLERANCE_FACTOR * boundsOf(positions, triangles).diagonal;
+    inputBounds = boundsOf(positions, referenced);
+    tolerance = WELD_TOLERANCE_FACTOR * inputBounds.diagonal;
     const weld = weldVertices(positions, referenced, tolerance);
     inputToWorking = weld.representative;
     weldedVertices = weld.welded;
@@ -98,7 +109,8 @@ export async function readMesh(bytes: Uint8Array, opts: ReadMeshOptions): Promis
     const cornerCount = corners.length / 3;
     inputVertices = cornerCount;
     inputFaces = facets;
-    tolerance = WELD_TOLERANCE_FACTOR * boundsOf(corners, null).diagonal;
+    inputBounds = boundsOf(corners, null);
+    tolerance = WELD_TOLERANCE_FACTOR * inputBounds.diagonal;
     const weld = weldVertices(corners, null, tolerance);
     const id = new Uint32Array(cornerCount);
     let unique = 0;
@@ -133,7 +145,10 @@ export async function readMesh(bytes: Uint8Array, opts: ReadMeshOptions): Promis
   }
   const vertexCount = positions.length / 3;
   const topology = meshTopology(clean.triangles, vertexCount);
-  const bounds = boundsOf(positions, clean.triangles);
+  // Welding moves no point, it only drops copies within the weld tolerance, so the input box stands (to within that
+  // tolerance) unless cleaning dropped faces; then it is measured again on the vertices still in use.
+  const bounds =
+    clean.droppedDegenerate + clean.droppedDuplicate === 0 ? inputBounds : boundsOf(positions, referencedFlags(clean.triangles, vertexCount));
 
   let working = clean.triangles;
   let decimated: MeshReport["decimated"] = null;
@@ -188,12 +203,14 @@ interface Bounds {
   diagonal: number;
 }
 
-/** Bounding box of the vertices referenced by `triangles` (all points when `triangles` is null). */
-function boundsOf(positions: Float64Array, triangles: Uint32Array | null): Bounds {
+/** Bounding box of the points flagged in `include` (all points when it is null). */
+function boundsOf(positions: Float64Array, include: Uint8Array | null): Bounds {
   let x0 = Infinity, y0 = Infinity, z0 = Infinity, x1 = -Infinity, y1 = -Infinity, z1 = -Infinity;
-  const n = triangles === null ? positions.length / 3 : triangles.length;
-  for (let k = 0; k < n; k++) {
-    const v = triangles === null ? k : triangles[k];
+  const count = positions.length / 3;
+  let n = 0;
+  for (let v = 0; v < count; v++) {
+    if (include !== null && include[v] === 0) continue;
+    n++;
     const x = positions[3 * v], y = positions[3 * v + 1], z = positions[3 * v + 2];
     if (x < x0) x0 = x;
     if (x > x1) x1 = x;
@@ -204,6 +221,12 @@ function boundsOf(positions: Float64Array, triangles: Uint32Array | null): Bound
   }
   if (n === 0) return { min: [0, 0, 0], max: [0, 0, 0], diagonal: 0 };
   return { min: [x0, y0, z0], max: [x1, y1, z1], diagonal: Math.hypot(x1 - x0, y1 - y0, z1 - z0) };
+}
+
+function referencedFlags(triangles: Uint32Array, vertexCount: number): Uint8Array {
+  const flags = new Uint8Array(vertexCount);
+  for (let k = 0; k < triangles.length; k++) flags[triangles[k]] = 1;
+  return flags;
 }
 
 function countReferenced(triangles: Uint32Array, vertexCount: number): number {

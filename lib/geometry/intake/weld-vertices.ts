@@ -17,6 +17,9 @@
  */
 export const WELD_TOLERANCE_FACTOR = 1e-6;
 
+/** Entries of the exact-copy cache (power of two; 16 Ki × 28 bytes stays in a core's L2 cache). */
+const EXACT_CACHE_SIZE = 1 << 14;
+
 /** Cell edge in tolerances: large enough that most points need one cell, small enough that cells hold few points. */
 const CELL_FACTOR = 16;
 
@@ -68,9 +71,31 @@ export function weldVertices(positions: Float64Array, active: Uint8Array | null,
   const next = new Int32Array(count);
   let welded = 0;
 
+  // Exact-copy cache: STL repeats each vertex in ~6 nearby facets. A small direct-mapped table keyed by the
+  // coordinates' bits answers those repeats from cache-resident memory. The answer is the same the grid search gives:
+  // the representatives within tolerance of a position only gain later (higher) indices, so the earliest one stays.
+  const bits = new Uint32Array(positions.buffer, positions.byteOffset, positions.length * 2);
+  const cacheX = new Float64Array(EXACT_CACHE_SIZE);
+  const cacheY = new Float64Array(EXACT_CACHE_SIZE);
+  const cacheZ = new Float64Array(EXACT_CACHE_SIZE);
+  const cacheRep = new Int32Array(EXACT_CACHE_SIZE).fill(-1);
+
   for (let p = 0; p < count; p++) {
     if (active !== null && active[p] === 0) continue;
     const x = positions[3 * p], y = positions[3 * p + 1], z = positions[3 * p + 2];
+    const w = 6 * p;
+    let hc = Math.imul(bits[w] ^ Math.imul(bits[w + 1], 0x9e3779b1), 0x85ebca77);
+    hc = Math.imul(hc ^ bits[w + 2] ^ Math.imul(bits[w + 3], 0xc2b2ae3d), 0x27d4eb2f);
+    hc = Math.imul(hc ^ bits[w + 4] ^ Math.imul(bits[w + 5], 0x165667b1), 0x9e3779b1);
+    const slot = (hc ^ (hc >>> 15)) & (EXACT_CACHE_SIZE - 1);
+    const cached = cacheRep[slot];
+    if (cached !== -1 && cacheX[slot] === x && cacheY[slot] === y && cacheZ[slot] === z) {
+      if (cached !== p) {
+        representative[p] = cached;
+        welded++;
+      }
+      continue;
+    }
     const fx = (x - minX) * inv, fy = (y - minY) * inv, fz = (z - minZ) * inv;
     const cx = Math.floor(fx), cy = Math.floor(fy), cz = Math.floor(fz);
     const rx = fx - cx, ry = fy - cy, rz = fz - cz;
@@ -97,6 +122,10 @@ export function weldVertices(positions: Float64Array, active: Uint8Array | null,
         }
       }
     }
+    cacheX[slot] = x;
+    cacheY[slot] = y;
+    cacheZ[slot] = z;
+    cacheRep[slot] = best !== -1 ? best : p;
     if (best !== -1) {
       representative[p] = best;
       welded++;

@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { readMesh } from "@/lib/geometry/intake/read-mesh";
+import { cleanTriangles } from "@/lib/geometry/intake/clean-triangles";
 import { weldVertices, WELD_TOLERANCE_FACTOR } from "@/lib/geometry/intake/weld-vertices";
 import { writeAsciiStl, writeBinaryStl, writeObj } from "@/lib/geometry/intake/write-mesh";
 import { makeTorus } from "@/tests/fixtures/intake/make-torus";
@@ -47,6 +48,26 @@ describe("cleaning", () => {
     // Disk: χ = V − E + F = 9 − 16 + 8 = 1 (Source: Euler's formula, χ = 2 − 2g − b with g = 0, b = 1).
     expect(r.report.eulerCharacteristic).toBe(1);
     expect(r.report.boundaryLoops).toBe(1);
+  });
+});
+
+describe("cleanTriangles", () => {
+  it("finds duplicates around a vertex shared by very many faces (a cone tip) and keeps the first copy", () => {
+    const n = 200;
+    const positions = new Float64Array(3 * (n + 1));
+    positions[2] = 1; // tip at (0, 0, 1)
+    for (let k = 0; k < n; k++) {
+      positions[3 * (k + 1)] = Math.cos((2 * Math.PI * k) / n);
+      positions[3 * (k + 1) + 1] = Math.sin((2 * Math.PI * k) / n);
+    }
+    const tris: number[] = [];
+    for (let k = 0; k < n; k++) tris.push(0, 1 + k, 1 + ((k + 1) % n));
+    // copies of faces 5 and 150, one reversed, one rotated
+    tris.push(0, 1 + 6, 1 + 5, 1 + 150, 1 + 151, 0);
+    const r = cleanTriangles(positions, new Uint32Array(tris), 2 * Math.SQRT2);
+    expect(r.droppedDuplicate).toBe(2);
+    expect(r.droppedDegenerate).toBe(0);
+    expect(Array.from(r.triangles)).toEqual(tris.slice(0, 3 * n));
   });
 });
 
