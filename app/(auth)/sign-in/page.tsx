@@ -4,6 +4,7 @@ import { redirect } from "next/navigation";
 import { AuthCard } from "@/components/auth/auth-card";
 import { SignInForm } from "@/components/auth/sign-in-form";
 import { TextLink } from "@/components/ui/text-link";
+import { appUrl } from "@/lib/auth/auth-config";
 import { authOptions } from "@/lib/auth/auth-options";
 import { safeCallbackUrl } from "@/lib/client/safe-callback";
 
@@ -15,7 +16,7 @@ const notices: Record<string, string> = {
 
 export default async function SignInPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   const params = await searchParams;
-  const callbackUrl = safeCallbackUrl(params.callbackUrl);
+  const callbackUrl = safeCallbackUrl(params.callbackUrl, appUrl());
   if (await getServerSession(authOptions)) redirect(callbackUrl);
   const noticeKey = typeof params.notice === "string" ? params.notice : "";
 
