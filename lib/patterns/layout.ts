@@ -88,6 +88,8 @@ export const SHEET_PADDING_MM = 6;
 export const TICK_LENGTH_MM = 4;
 export const TICK_NUMBER_SIZE_MM = 2.4;
 export const RUN_TEXT_SIZE_MM = 2.4;
+/** Seam text centre, mm in from the edge: beyond the tick (4 mm) and its number (centre 6.2 mm, 2.4 mm high). */
+export const RUN_TEXT_INSET_MM = 9.5;
 
 /** Label of the piece a count-0 piece is the mirrored copy of (the pipeline adds `mirrorOf`), or null. */
 export function mirrorOfLabel(p: PieceReport): string | null {
@@ -146,8 +148,13 @@ function layoutPiece(p: PieceReport, index: number, f: number, materialText: str
   const perimeterMm = polygonPerimeter(outline);
   const lp = labelPoint(outline);
   const clearance = Math.max(lp.clearance, 1);
-  const labelSizeMm = Math.min(30, Math.max(4, clearance * 0.8));
-  const infoSizeMm = Math.min(4, Math.max(1.8, clearance * 0.14));
+  // Sizes from the clearance c (radius of the free circle at the label point). Seam texts sit RUN_TEXT_INSET_MM in,
+  // clear of the tick numbers; the label block keeps to the circle of radius r inside them.
+  const roomy = clearance >= 16;
+  const runInset = roomy ? RUN_TEXT_INSET_MM : Math.max(3, clearance * 0.3);
+  const r = roomy ? Math.max(clearance - RUN_TEXT_INSET_MM - 1.5, clearance * 0.35) : clearance * 0.6;
+  const labelSizeMm = Math.min(30, Math.max(4, r * 0.75));
+  const infoSizeMm = Math.min(4, Math.max(1.8, r * 0.13));
 
   const ticks: TickMark[] = p.ticks.map((t) => {
     const len = Math.hypot(t.nx, t.ny) || 1;
@@ -166,7 +173,7 @@ function layoutPiece(p: PieceReport, index: number, f: number, materialText: str
     if (path.length < 4) continue;
     const L = polylineLength(path);
     if (!(L > 0)) continue;
-    const inset = Math.min(10, Math.max(3, clearance * 0.5));
+    const inset = runInset;
     const labels: RunLabel[] = [];
     const copies = Math.max(1, Math.round(L / RUN_TEXT_REPEAT_MM));
     for (let k = 0; k < copies; k++) {
