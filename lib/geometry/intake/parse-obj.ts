@@ -13,7 +13,7 @@
 import { GeometryError } from "../errors";
 import { GrowableF64, GrowableU32 } from "./growable";
 import { scanFloat, scanInt, scanState, wordAt } from "./scan-number";
-import { triangulatePolygon } from "./triangulate-polygon";
+import { EAR_CLIP_WORK_PER_FILE, triangulatePolygon, type EarClipBudget } from "./triangulate-polygon";
 
 export interface ObjParseResult {
   /** #V×3 positions of every `v` statement, in file order (file units). */
@@ -49,6 +49,7 @@ export function parseObj(bytes: Uint8Array): ObjParseResult {
   line = 1;
   let maxIndex = -1;
   let maxIndexLine = 0;
+  const earClipBudget: EarClipBudget = { remaining: EAR_CLIP_WORK_PER_FILE };
   let i = 0;
 
   while (i < n) {
@@ -187,7 +188,7 @@ export function parseObj(bytes: Uint8Array): ObjParseResult {
         tri.data[tri.length++] = corners[1];
         tri.data[tri.length++] = corners[2];
       } else if (maxCorner(corners, count) < vertexCount) {
-        triangulatePolygon(pos.data, corners, count, tri);
+        triangulatePolygon(pos.data, corners, count, tri, earClipBudget);
       } else {
         // positions not read yet: fan (exact for convex polygons)
         fanInto(corners, count, tri);

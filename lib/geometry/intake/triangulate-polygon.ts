@@ -6,8 +6,23 @@
  * by Ear Clipping" (Geometric Tools, 2002); the plane is given by Newell's normal (Source: M. E. Newell, via
  * I. E. Sutherland et al., "A Characterization of Ten Hidden-Surface Algorithms", Computing Surveys 6(1), 1974).
  * A polygon with no area or one that crosses itself (no ear left) falls back to the fan for what remains.
+ *
+ * Ear clipping costs up to O(n³) for n corners, so hostile files cannot make it hang: polygons with more than
+ * MAX_EAR_CLIP_CORNERS corners are fanned, and a work budget shared by one file (EarClipBudget) switches the rest of
+ * the file to fans once spent. Real meshes use a tiny fraction of it.
  */
 import type { GrowableU32 } from "./growable";
+
+/** Largest polygon that is ear-clipped; bigger ones are fanned. */
+export const MAX_EAR_CLIP_CORNERS = 64;
+
+/** Ear-test steps one file may spend (≈ 0.1 s of CPU). */
+export const EAR_CLIP_WORK_PER_FILE = 50_000_000;
+
+/** Remaining ear-clipping work of one file, shared by all its polygons. */
+export interface EarClipBudget {
+  remaining: number;
+}
 
 let px = new Float64Array(64);
 let py = new Float64Array(64);
@@ -18,10 +33,17 @@ let next = new Int32Array(64);
  * @param positions  #V×3 vertex positions
  * @param corners    polygon corner vertex indices (first `count` entries), in face order
  * @param out        receives 3 indices per triangle (count − 2 triangles)
+ * @param budget     ear-clipping work left for the file (see EarClipBudget)
  */
-export function triangulatePolygon(positions: Float64Array, corners: Uint32Array, count: number, out: GrowableU32): void {
+export function triangulatePolygon(
+  positions: Float64Array,
+  corners: Uint32Array,
+  count: number,
+  out: GrowableU32,
+  budget: EarClipBudget = { remaining: EAR_CLIP_WORK_PER_FILE },
+): void {
   out.reserve(3 * (count - 2));
-  if (count === 3 || !isConcave(positions, corners, count)) {
+  if (count === 3 || count > MAX_EAR_CLIP_CORNERS || budget.remaining <= 0 || !isConcave(positions, corners, count)) {
     fan(corners, 0, count, out);
     return;
   }
@@ -35,6 +57,8 @@ export function triangulatePolygon(positions: Float64Array, corners: Uint32Array
   let sinceLastEar = 0;
   const d = out.data;
   while (remaining > 3) {
+    budget.remaining -= remaining;
+    if (budget.remaining <= 0) break;
     const a = prev[v], c = next[v];
     if (isEar(a, v, c)) {
       d[out.length++] = corners[a];

@@ -1,7 +1,7 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { GrowableU32 } from "@/lib/geometry/intake/growable";
-import { triangulatePolygon } from "@/lib/geometry/intake/triangulate-polygon";
+import { MAX_EAR_CLIP_CORNERS, triangulatePolygon } from "@/lib/geometry/intake/triangulate-polygon";
 
 /** Signed area of the polygon (shoelace formula; Source: Gauss's area formula) and of the triangles, in the xy plane. */
 function shoelace(xs: number[], ys: number[]): number {
@@ -69,5 +69,54 @@ describe("triangulatePolygon", () => {
     const out = new GrowableU32(4);
     triangulatePolygon(positions, new Uint32Array([0, 1, 2, 3, 4]), 5, out);
     expect(out.length).toBe(9);
+  });
+});
+
+describe("triangulatePolygon on hostile input", () => {
+  it("reads a file full of large self-crossing polygons in bounded time", async () => {
+    const { parseObj } = await import("@/lib/geometry/intake/parse-obj");
+    // 2000 polygons of 64 corners each on a zig-zag star that crosses itself everywhere
+    const lines: string[] = [];
+    for (let k = 0; k < 64; k++) {
+      const a = (2 * Math.PI * k * 29) / 64; // step 29/64 of a turn: a star polygon {64/29}
+      lines.push(`v ${Math.cos(a)} ${Math.sin(a)} 0`);
+    }
+    const face = "f " + Array.from({ length: 64 }, (_, k) => k + 1).join(" ");
+    for (let p = 0; p < 2000; p++) lines.push(face);
+    const text = new TextEncoder().encode(lines.join("\n"));
+    const t0 = performance.now();
+    const r = parseObj(text);
+    const ms = performance.now() - t0;
+    expect(r.triangles.length).toBe(2000 * 62 * 3);
+    expect(ms).toBeLessThan(5000);
+  });
+
+  // The L-shaped hexagon of parse-obj.test.ts, written from the corner whose fan covers the notch.
+  const L = new Float64Array([2, 1, 0, 1, 1, 0, 1, 2, 0, 0, 2, 0, 0, 0, 0, 2, 0, 0]);
+  const fanOfSix = [0, 1, 2, 0, 2, 3, 0, 3, 4, 0, 4, 5];
+
+  it("ear-clips while the file's budget lasts, then fans", () => {
+    const corners = new Uint32Array([0, 1, 2, 3, 4, 5]);
+    const clipped = new GrowableU32(4);
+    const budget = { remaining: 1000 };
+    triangulatePolygon(L, corners, 6, clipped, budget);
+    expect(Array.from(clipped.data.subarray(0, 12))).not.toEqual(fanOfSix);
+    expect(budget.remaining).toBeLessThan(1000);
+    const fanned = new GrowableU32(4);
+    triangulatePolygon(L, corners, 6, fanned, { remaining: 0 });
+    expect(Array.from(fanned.data.subarray(0, 12))).toEqual(fanOfSix);
+  });
+
+  it("fans polygons with more corners than MAX_EAR_CLIP_CORNERS", () => {
+    const n = MAX_EAR_CLIP_CORNERS + 1;
+    const positions = new Float64Array(3 * n);
+    for (let k = 0; k < n; k++) {
+      const r = k % 2 === 0 ? 1 : 0.5; // a concave star
+      positions[3 * k] = r * Math.cos((2 * Math.PI * k) / n);
+      positions[3 * k + 1] = r * Math.sin((2 * Math.PI * k) / n);
+    }
+    const out = new GrowableU32(4);
+    triangulatePolygon(positions, Uint32Array.from({ length: n }, (_, k) => k), n, out, { remaining: 1e9 });
+    for (let t = 0; t < n - 2; t++) expect(Array.from(out.data.subarray(3 * t, 3 * t + 3))).toEqual([0, t + 1, t + 2]);
   });
 });
