@@ -2,7 +2,7 @@ import { describe, expect, it } from "vitest";
 import { FOAM_MATERIALS, STRICTEST_STRETCH_LIMIT, findFoamMaterial } from "@/lib/patterns/materials";
 import { summarizeStretch } from "@/lib/patterns/stretch-summary";
 import { buildCutList } from "@/lib/patterns/cut-list";
-import { buildLayout, cutCountText, bevelText } from "@/lib/patterns/layout";
+import { buildLayout, cutCountText, bevelText, RUN_TEXT_SIZE_MM } from "@/lib/patterns/layout";
 import { cylinderStretchout, manyPieces, metrics, piece, report } from "./fixtures";
 
 describe("foam materials", () => {
@@ -97,6 +97,17 @@ describe("piece annotations", () => {
       expect(r.labels).toHaveLength(5);
       const ys = r.labels.map((l) => l.y).sort((a, b) => a - b);
       for (let i = 1; i < ys.length; i++) expect(ys[i] - ys[i - 1]).toBeCloseTo(160, 6);
+    }
+  });
+
+  it("keeps seam texts clear of the tick numbers and of the label block", () => {
+    const layout = buildLayout(report(manyPieces(20)), "EVA foam", 6);
+    for (const p of layout.pieces) {
+      const blockHalf = (p.labelSizeMm + p.infoLines.length * p.infoSizeMm * 1.25) / 2;
+      for (const r of p.runs) for (const l of r.labels) {
+        expect(Math.hypot(l.x - p.labelX, l.y - p.labelY)).toBeGreaterThan(blockHalf + RUN_TEXT_SIZE_MM / 2);
+        for (const t of p.ticks) expect(Math.hypot(l.x - t.numX, l.y - t.numY)).toBeGreaterThan(RUN_TEXT_SIZE_MM);
+      }
     }
   });
 });
