@@ -7,7 +7,7 @@ import { formatDay } from "@/lib/client/format";
 import { useProjects } from "@/lib/client/use-projects";
 import { StatusBadge } from "./status-badge";
 
-/** Every project of the active shop, newest change first. */
+/** Every project of the active shop, in the order the API gives (soonest due first). */
 export function ProjectsTable({ initial }: { initial?: Project[] }) {
   const query = useProjects(initial);
 
@@ -21,7 +21,8 @@ export function ProjectsTable({ initial }: { initial?: Project[] }) {
       </p>
     );
   }
-  const projects = [...query.data].sort((a, b) => b.updatedAt.localeCompare(a.updatedAt));
+  // Kept in the API's order: soonest due first, undated last, then newest.
+  const projects = query.data;
   if (projects.length === 0) {
     return (
       <div className="flex flex-col items-start gap-1 py-6">

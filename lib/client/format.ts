@@ -14,12 +14,12 @@ const dateTimeFmt = new Intl.DateTimeFormat("en-GB", {
 export function formatDay(value: string | null | undefined): string {
   if (!value) return "—";
   const d = new Date(value.length === 10 ? `${value}T00:00:00Z` : value);
-  return Number.isNaN(d.getTime()) ? value : dateFmt.format(d);
+  return Number.isNaN(d.getTime()) ? value : dateFmt.format(d).replace("Sept", "Sep");
 }
 
 /** An ISO timestamp as "24 Dec 2026, 14:05 UTC". */
 export function formatTimestamp(value: string | null | undefined): string {
   if (!value) return "—";
   const d = new Date(value);
-  return Number.isNaN(d.getTime()) ? value : `${dateTimeFmt.format(d)} UTC`;
+  return Number.isNaN(d.getTime()) ? value : `${dateTimeFmt.format(d).replace("Sept", "Sep")} UTC`;
 }
