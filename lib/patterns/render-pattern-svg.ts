@@ -107,7 +107,8 @@ function pieceSvg(p: LayoutPiece, X: (x: number) => string, Y: (y: number) => st
     y -= p.infoSizeMm * 1.25;
   }
   for (const r of p.runs) for (const l of r.labels) {
-    s.push(`<text x="${X(l.x)}" y="${Y(l.y)}" font-size="${RUN_TEXT_SIZE_MM}" transform="rotate(${n(-l.angleDeg)} ${X(l.x)} ${Y(l.y)})" data-run="${r.run}">${esc(r.text)}</text>`);
+    const fill = r.kind !== "straight" && r.opensTo !== "none" ? "#b91c1c" : "#374151";
+    s.push(`<text x="${X(l.x)}" y="${Y(l.y)}" font-size="${RUN_TEXT_SIZE_MM}" fill="${fill}" transform="rotate(${n(-l.angleDeg)} ${X(l.x)} ${Y(l.y)})" data-run="${r.run}">${esc(r.text)}</text>`);
   }
   s.push(`</g>`);
   s.push(`</g>`);
