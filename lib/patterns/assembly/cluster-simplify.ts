@@ -95,8 +95,10 @@ export function simplifyToBudget(mesh: SimpleMesh, maxFaces: number): SimpleMesh
   if (mesh.triangles.length / 3 <= maxFaces) return mesh;
   let grid = 96;
   let out = clusterSimplify(mesh, grid);
+  // A surface's cell count grows with grid², so the next grid is guessed from the last result.
   while (out.triangles.length / 3 > maxFaces && grid > 8) {
-    grid = Math.floor(grid * 0.75);
+    const ratio = Math.sqrt(maxFaces / (out.triangles.length / 3));
+    grid = Math.max(8, Math.min(grid - 1, Math.floor(grid * ratio * 0.95)));
     out = clusterSimplify(mesh, grid);
   }
   return out;
