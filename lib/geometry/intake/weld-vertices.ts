@@ -20,6 +20,13 @@ export const WELD_TOLERANCE_FACTOR = 1e-6;
 /** Entries of the exact-copy cache (power of two; 16 Ki × 28 bytes stays in a core's L2 cache). */
 const EXACT_CACHE_SIZE = 1 << 14;
 
+/**
+ * Most representatives one point is compared with. Only a pathological layout reaches it (a dense cluster far
+ * smaller than the bounding box, e.g. a scan plus one stray vertex a thousand sizes away): then a point is compared
+ * with the newest candidates only and may stay unwelded, which is harmless, instead of the search turning quadratic.
+ */
+const MAX_CANDIDATES = 64;
+
 /** Cell edge in tolerances: large enough that most points need one cell, small enough that cells hold few points. */
 const CELL_FACTOR = 16;
 
@@ -105,6 +112,7 @@ export function weldVertices(positions: Float64Array, active: Uint8Array | null,
     const oz = rz < reach ? -1 : rz > 1 - reach ? 1 : 0;
     let best = -1;
     let own = -1; // slot of the own cell (found or empty)
+    let budget = MAX_CANDIDATES;
     for (let a = 0; a <= (ox !== 0 ? 1 : 0); a++) {
       const qx = cx + a * ox;
       for (let b = 0; b <= (oy !== 0 ? 1 : 0); b++) {
@@ -114,7 +122,8 @@ export function weldVertices(positions: Float64Array, active: Uint8Array | null,
           let s = hash(qx, qy, qz) & mask;
           while (table[4 * s + 3] !== -1 && (table[4 * s] !== qx || table[4 * s + 1] !== qy || table[4 * s + 2] !== qz)) s = (s + 1) & mask;
           if (a === 0 && b === 0 && c === 0) own = s;
-          for (let r = table[4 * s + 3]; r !== -1; r = next[r]) {
+          for (let r = table[4 * s + 3]; r !== -1 && budget > 0; r = next[r]) {
+            budget--;
             if (best !== -1 && r > best) continue;
             const dx = positions[3 * r] - x, dy = positions[3 * r + 1] - y, dz = positions[3 * r + 2] - z;
             if (dx * dx + dy * dy + dz * dz <= tol2) best = r;

@@ -14,7 +14,8 @@ export interface JsonSyntaxProblem {
   detail: string;
 }
 
-/** The first syntax problem, or null when the text is valid JSON. Nesting deeper than 10 000 levels counts as a problem. */
+/** The first syntax problem, or null when the text is valid JSON. Nesting deeper than 1000 levels counts as a problem
+ * (no seam file needs more than three). */
 export function findJsonSyntaxError(text: string): JsonSyntaxProblem | null {
   let i = 0;
   const n = text.length;
@@ -69,7 +70,7 @@ export function findJsonSyntaxError(text: string): JsonSyntaxProblem | null {
     }
   };
   const value = (depth: number): void => {
-    if (depth > 10000) fail("less deeply nested data");
+    if (depth > 1000) fail("less deeply nested data (more than 1000 levels)");
     ws();
     const c = text[i];
     if (c === "{") {

@@ -111,6 +111,11 @@ function describeValue(data: unknown, path: readonly PropertyKey[]): string {
     v = (v as Record<PropertyKey, unknown>)[p];
   }
   if (v === undefined) return "";
-  const text = JSON.stringify(v);
+  let text: string | undefined;
+  try {
+    text = JSON.stringify(v);
+  } catch {
+    return ""; // nesting too deep to print
+  }
   return text === undefined ? "" : ` (found ${text.length > 40 ? text.slice(0, 37) + "..." : text})`;
 }
