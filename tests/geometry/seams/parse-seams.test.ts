@@ -35,6 +35,13 @@ describe("parseSeamsJson", () => {
     );
   });
 
+  it("copes with absurdly nested input", () => {
+    const open = errorOf(() => parseSeamsJson('{"seams": ' + "[".repeat(5000)));
+    expect(open.message).toBe('The seam file is not valid JSON (line 1, column 1011: expected less deeply nested data (more than 1000 levels) but found "[").');
+    const deep = errorOf(() => parseSeamsJson('{"seams": [' + "[".repeat(3000) + "]".repeat(3000) + "]}"));
+    expect(deep.message).toMatch(/^In the seam file, seams\[0\] must be a pair \[i, j\] of two vertex indices/);
+  });
+
   it("names the element and why for a wrong shape", () => {
     expect(errorOf(() => parseSeamsJson("")).message).toBe('The seam file is empty; expected JSON like {"seams": [[0, 1], [1, 2]]}.');
     expect(errorOf(() => parseSeamsJson("[[0, 1]]")).message).toBe('The seam file must be a JSON object with a "seams" array, like {"seams": [[0, 1]]}.');
