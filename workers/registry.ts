@@ -1,6 +1,9 @@
 import type { Processor } from "bullmq";
 import { QUEUE_NAMES, type QueueName } from "@/lib/queue/connection";
 import { processSendMail } from "./processors/send-mail";
+import { processScanIntakeJob } from "./processors/scan-intake";
+import { processFlattenJob } from "./processors/flatten-pattern";
+import { queueSettings } from "@/lib/jobs/queue-settings";
 
 /**
  * Which processor serves which queue. One file per processor in workers/processors/; add a queue name in
@@ -13,4 +16,8 @@ export interface ProcessorEntry {
   concurrency?: number;
 }
 
-export const PROCESSORS: ProcessorEntry[] = [{ queue: QUEUE_NAMES.mail, processor: processSendMail }];
+export const PROCESSORS: ProcessorEntry[] = [
+  { queue: QUEUE_NAMES.mail, processor: processSendMail },
+  { queue: QUEUE_NAMES.scanIntake, processor: processScanIntakeJob, concurrency: queueSettings().SCAN_INTAKE_CONCURRENCY },
+  { queue: QUEUE_NAMES.flatten, processor: processFlattenJob, concurrency: queueSettings().FLATTEN_CONCURRENCY },
+];

@@ -10,6 +10,10 @@ import { getEnv } from "@/lib/env";
 export const QUEUE_NAMES = {
   /** Outgoing e-mail with retries (invitations, password resets). */
   mail: "mail",
+  /** Scan intake: parse, weld, report and write the working meshes of an upload (workers/processors/scan-intake.ts). */
+  scanIntake: "scan-intake",
+  /** Flattening a scan's seam map into a pattern and its documents (workers/processors/flatten-pattern.ts). */
+  flatten: "flatten",
 } as const;
 
 export type QueueName = (typeof QUEUE_NAMES)[keyof typeof QUEUE_NAMES];
