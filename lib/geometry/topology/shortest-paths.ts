@@ -9,6 +9,7 @@ import type { VertexAdjacency } from "./vertex-adjacency";
  * @param pred #V output predecessor vertex (−1 for sources and unreachable)
  * @param target optional #V flags; the search stops at the first settled vertex with target[v] ≠ 0 and returns it
  * @param blocked optional #E flags; edges with blocked[e] ≠ 0 are not crossed
+ * @param settled optional #V output: vertices in the order they were settled (unused tail entries are left as is)
  * @returns the settled target vertex, or −1 (no target given or none reachable)
  */
 export function dijkstra(
@@ -19,6 +20,7 @@ export function dijkstra(
   pred: Int32Array,
   target?: Uint8Array,
   blocked?: Uint8Array,
+  settled?: Int32Array,
 ): number {
   const nv = dist.length;
   dist.fill(Infinity);
@@ -37,6 +39,7 @@ export function dijkstra(
     heapKey[i] = key; heapVal[i] = v;
   };
   const done = new Uint8Array(nv);
+  let settledCount = 0;
   for (let s = 0; s < sources.length; s++) {
     const v = sources[s];
     if (dist[v] !== 0) { dist[v] = 0; push(0, v); }
@@ -57,6 +60,7 @@ export function dijkstra(
     heapKey[i] = lk; heapVal[i] = lv;
     if (done[v] || key > dist[v]) continue;
     done[v] = 1;
+    if (settled) settled[settledCount++] = v;
     if (target && target[v]) return v;
     const x = positions[3 * v], y = positions[3 * v + 1], z = positions[3 * v + 2];
     for (let p = adj.offsets[v]; p < adj.offsets[v + 1]; p++) {

@@ -16,8 +16,7 @@ const countWord = (n: number) => (n < NUMBER_WORDS.length ? NUMBER_WORDS[n] : St
  * paths (Dijkstra on 3D edge lengths).
  * - closed genus 0: a seam between two far-apart vertices (double sweep: farthest from vertex 0, then farthest
  *   from that one);
- * - genus 0 with k ≥ 2 boundary loops: k − 1 shortest paths, each from the loops joined so far to the nearest other
- *   loop;
+ * - genus 0 with k ≥ 2 boundary loops: k − 1 shortest connections forming a spanning tree of the loops;
  * - genus ≥ 1: a tree–cotree cut graph (Eppstein 2003, "Dynamic generators of topologically embedded graphs";
  *   Erickson & Whittlesey 2005, "Greedy optimal homotopy and homology generators"), with the primal tree a shortest
  *   path tree so the loops are short, pruned of dangling branches. Not guaranteed shortest.
@@ -65,29 +64,47 @@ export function suggestCut(
       cut: pairs.length > 0 ? pairs : null,
     };
   }
-  // genus 0, several loops: grow a joined set from loop 0
-  const joined: number[] = Array.from(loops[0]);
+  // genus 0, k ≥ 2 loops: shortest connections between loops, chosen as a minimum spanning tree over the
+  // Voronoi regions of the loops (one multi-source Dijkstra; Mehlhorn 1988, "A faster approximation algorithm for
+  // the Steiner problem in graphs"), so many holes cost O(n log n), not one search per hole
+  const k = loops.length;
   const loopOf = new Int32Array(nv).fill(-1);
-  loops.forEach((loop, i) => loop.forEach((v) => { loopOf[v] = i; }));
-  const target = new Uint8Array(nv);
-  for (let i = 1; i < loops.length; i++) for (const v of loops[i]) target[v] = 1;
+  const sources: number[] = [];
+  loops.forEach((loop, i) => loop.forEach((v) => { loopOf[v] = i; sources.push(v); }));
+  const settled = new Int32Array(nv).fill(-1);
+  dijkstra(adj, positions, sources, dist, pred, undefined, undefined, settled);
+  const region = new Int32Array(nv).fill(-1);
+  for (let s = 0; s < nv && settled[s] >= 0; s++) {
+    const v = settled[s];
+    region[v] = pred[v] < 0 ? loopOf[v] : region[pred[v]];
+  }
+  const cand: { cost: number; a: number; b: number }[] = [];
+  for (let e = 0; e < he.edgeCount; e++) {
+    const a = he.vertex[2 * e], b = he.vertex[2 * e + 1];
+    if (region[a] < 0 || region[b] < 0 || region[a] === region[b]) continue;
+    const dx = positions[3 * a] - positions[3 * b], dy = positions[3 * a + 1] - positions[3 * b + 1], dz = positions[3 * a + 2] - positions[3 * b + 2];
+    cand.push({ cost: dist[a] + dist[b] + Math.sqrt(dx * dx + dy * dy + dz * dz), a, b });
+  }
+  cand.sort((x, y) => x.cost - y.cost);
+  const parent = Int32Array.from({ length: k }, (_, i) => i);
+  const root = (x: number): number => { while (parent[x] !== x) { parent[x] = parent[parent[x]]; x = parent[x]; } return x; };
   const pairs: [number, number][] = [];
   const links: string[] = [];
-  for (let step = 1; step < loops.length; step++) {
-    const hit = dijkstra(adj, positions, joined, dist, pred, target);
-    if (hit < 0) break;
-    const path = tracePath(pred, hit);
+  for (const c of cand) {
+    const ra = root(region[c.a]), rb = root(region[c.b]);
+    if (ra === rb) continue;
+    parent[ra] = rb;
+    const path = tracePath(pred, c.a).concat(tracePath(pred, c.b).reverse());
     toPairs(path, pairs);
-    links.push(`from vertex ${w(path[0])} to vertex ${w(hit)}`);
-    for (const v of path) joined.push(v);
-    for (const v of loops[loopOf[hit]]) { target[v] = 0; joined.push(v); }
+    links.push(`from vertex ${w(path[0])} to vertex ${w(path[path.length - 1])}`);
+    if (links.length === k - 1) break;
   }
-  const k = loops.length;
+  const shown = links.slice(0, 3).join(", ") + (links.length > 3 ? ` and ${links.length - 3} more` : "");
   return {
     problem:
       k === 2
         ? `two boundary loops: join them with a seam ${links[0] ?? ""}.`
-        : `${countWord(k)} boundary loops: join them with seams ${links.join(", ")}.`,
+        : `${countWord(k)} boundary loops: join them with seams ${shown}.`,
     cut: pairs.length > 0 ? pairs : null,
   };
 }

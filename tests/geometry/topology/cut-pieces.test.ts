@@ -68,6 +68,24 @@ describe("cutPieces", () => {
     expect(again[0].topology.isDisk).toBe(true);
   });
 
+  it("a sheet with nine holes gets a 'ten boundary loops' problem; the suggested seams join them into a disk", () => {
+    const n = 20;
+    const g = flatGrid({ faces: 2 * n * n });
+    const holes = new Set<number>();
+    for (let a = 0; a < 3; a++) for (let b = 0; b < 3; b++) holes.add((3 + 6 * a) * n + 3 + 6 * b); // cells (row, col)
+    const kept: number[] = [];
+    for (let c = 0; c < n * n; c++) if (!holes.has(c)) kept.push(...g.triangles.subarray(6 * c, 6 * c + 6));
+    const mesh = { positions: g.positions, triangles: new Uint32Array(kept) };
+    const [p] = cutPieces(mesh, new Uint32Array());
+    expect(p.topology).toMatchObject({ isDisk: false, boundaryLoops: 10, genus: 0 });
+    expect(p.topology.problem).toMatch(/^ten boundary loops: join them with seams from vertex \d+ to vertex \d+, .* and 6 more\.$/);
+    const again = cutPieces(mesh, seams(p.topology.suggestedCut!));
+    expect(again.length).toBe(1);
+    expect(again[0].topology.isDisk).toBe(true);
+    // neighbouring holes are 5 cells apart and the nearest ones 3 cells from the edge: 9 connections of ≤ 5 edges
+    expect(p.topology.suggestedCut!.length).toBeLessThanOrEqual(9 * 5);
+  });
+
   it("a torus-like handle gets a 'handle (genus 1)' problem and a cut graph that opens it to a disk", () => {
     // torus: N×M grid on the torus surface
     const n = 12, m = 8, R = 3, r = 1;
