@@ -112,21 +112,21 @@ export async function readMesh(bytes: Uint8Array, opts: ReadMeshOptions): Promis
     inputBounds = boundsOf(corners, null);
     tolerance = WELD_TOLERANCE_FACTOR * inputBounds.diagonal;
     const weld = weldVertices(corners, null, tolerance);
-    const id = new Uint32Array(cornerCount);
-    let unique = 0;
-    for (let c = 0; c < cornerCount; c++) {
-      const r = weld.representative[c];
-      id[c] = r === c ? unique++ : id[r];
-    }
+    // Number distinct vertices in order of first appearance, in one pass (a representative precedes its copies).
+    const unique = cornerCount - weld.welded;
+    const representative = weld.representative;
     positions = new Float64Array(3 * unique);
-    triangles = new Uint32Array(cornerCount);
+    triangles = new Uint32Array(cornerCount); // corner c of facet f is 3f + c, so the corner order is the face order
+    let next = 0;
     for (let c = 0; c < cornerCount; c++) {
-      const v = id[c];
-      triangles[c] = v;
-      if (weld.representative[c] === c) {
-        positions[3 * v] = corners[3 * c];
-        positions[3 * v + 1] = corners[3 * c + 1];
-        positions[3 * v + 2] = corners[3 * c + 2];
+      const r = representative[c];
+      if (r === c) {
+        positions[3 * next] = corners[3 * c];
+        positions[3 * next + 1] = corners[3 * c + 1];
+        positions[3 * next + 2] = corners[3 * c + 2];
+        triangles[c] = next++;
+      } else {
+        triangles[c] = triangles[r];
       }
     }
     inputToWorking = new Uint32Array(unique);
