@@ -74,12 +74,40 @@ describe("invite a new member by e-mail", () => {
     expect(await page.getByRole("button", { name: "New project" }).count()).toBe(0);
     await b.screenshot("invitee-projects");
 
-    // The owner's members list now has the new reviewer; the link is used up.
+    // The members list now has the new reviewer; the link is used up.
     await b.goto("/members");
     await page.getByRole("row").filter({ hasText: invitee }).waitFor();
+    await b.signOut();
     await page.goto(href!);
     await page.getByText(/This invitation cannot be used/).waitFor();
 
+    // The owner changes the newcomer's role, then removes them.
+    await b.signIn(demoEmail("owner"));
+    await b.goto("/members");
+    const row = page.getByRole("row").filter({ hasText: invitee });
+    await row.getByRole("combobox", { name: "Role of Rowan Invitee" }).selectOption("fabricator");
+    await page.getByText("Rowan Invitee is now fabricator.").waitFor();
+    await page.reload();
+    expect(await page.getByRole("row").filter({ hasText: invitee }).getByRole("combobox").inputValue()).toBe("fabricator");
+    await page.getByRole("row").filter({ hasText: invitee }).getByRole("button", { name: "Remove Rowan Invitee" }).click();
+    await page.getByRole("row").filter({ hasText: invitee }).getByRole("button", { name: "Confirm removal" }).click();
+    await page.getByText("Rowan Invitee was removed from the shop.").waitFor();
+    await page.getByRole("row").filter({ hasText: invitee }).waitFor({ state: "detached" });
+
     expect(b.unexpectedProblems()).toEqual([]);
+  });
+
+  it("the last owner cannot demote themselves, and the screen says why", async () => {
+    await b.reset();
+    await b.signIn(demoEmail("owner"));
+    const page = b.page;
+    await b.goto("/members");
+    const ownRow = page.getByRole("row").filter({ hasText: demoEmail("owner") });
+    await ownRow.getByRole("combobox").selectOption("designer");
+    await page.getByRole("alert").filter({ hasText: "The last owner cannot be" }).waitFor();
+    await page.reload();
+    expect(await page.getByRole("row").filter({ hasText: demoEmail("owner") }).getByRole("combobox").inputValue()).toBe("owner");
+    // The refused PATCH answers 409, which Chromium logs as a failed request.
+    expect(b.unexpectedProblems((p) => /status of 409/.test(p.text))).toEqual([]);
   });
 });
