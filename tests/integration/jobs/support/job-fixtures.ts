@@ -85,6 +85,12 @@ export class JobWatcher {
     return new Promise((resolve) => this.waiters.set(jobId, resolve));
   }
 
+  /** The next outcome of a job id (for a job run again after it finished). */
+  outcomeAfter(jobId: string): Promise<{ ok: boolean; value: string }> {
+    this.done.delete(jobId);
+    return new Promise((resolve) => this.waiters.set(jobId, resolve));
+  }
+
   /** Resolves once the job reported progress ≥ min. */
   progressAtLeast(jobId: string, min: number): Promise<void> {
     if ((this.progress.get(jobId) ?? []).some((p) => p >= min)) return Promise.resolve();

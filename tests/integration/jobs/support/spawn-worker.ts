@@ -6,6 +6,8 @@ const root = path.resolve(import.meta.dirname, "../../../..");
 export interface SpawnedWorker {
   child: ChildProcess;
   output: () => string;
+  /** resolves once the output contains `text` */
+  waitForOutput: (text: string) => Promise<void>;
   /** resolves when the process has exited */
   exited: Promise<number | null>;
   stop: () => Promise<void>;
@@ -23,10 +25,17 @@ export async function spawnWorker(env: Record<string, string>): Promise<SpawnedW
     stdio: ["ignore", "pipe", "pipe"],
   });
   let out = "";
+  const outputWaiters: { text: string; resolve: () => void }[] = [];
   const exited = new Promise<number | null>((resolve) => child.on("exit", (code) => resolve(code)));
   await new Promise<void>((resolve, reject) => {
     const onData = (b: Buffer) => {
       out += b.toString();
+      for (const w of [...outputWaiters]) {
+        if (out.includes(w.text)) {
+          outputWaiters.splice(outputWaiters.indexOf(w), 1);
+          w.resolve();
+        }
+      }
       if (out.includes(" ready\n")) resolve();
     };
     child.stdout!.on("data", onData);
@@ -36,6 +45,7 @@ export async function spawnWorker(env: Record<string, string>): Promise<SpawnedW
   return {
     child,
     output: () => out,
+    waitForOutput: (text) => (out.includes(text) ? Promise.resolve() : new Promise<void>((resolve) => outputWaiters.push({ text, resolve }))),
     exited,
     stop: async () => {
       if (child.exitCode !== null || child.signalCode !== null) return;
