@@ -4,7 +4,7 @@ import path from "node:path";
 import { ensureDebianPackages, START_PACKAGES, TEST_PACKAGES } from "./apt";
 import { buildIfStale } from "./build";
 import { lockOrFail, type Lock } from "./lock";
-import { elapsedSeconds, fail, info, step, warn } from "./log";
+import { elapsedSeconds, fail, info, step as runStep, warn } from "./log";
 import { assertPortFree } from "./ports";
 import { ensureDatabase, initCluster, isCluster, resolvePgLocation, startPostgres, stopPostgres } from "./postgres";
 import { getProfile, type Profile, type ProfileName } from "./profiles";
@@ -15,7 +15,7 @@ import { run } from "./sh";
 import { startSmtpFake } from "./smtp-fake";
 import { childEnv, stackEnv } from "./stack-env";
 import { killLeftover, supervise, waitForHttp, type Supervised } from "./supervisor";
-import { summariseVitest } from "./vitest-summary";
+import { formatVitestCounts, readVitestCounts, type VitestCounts } from "./vitest-summary";
 
 /**
  * `npm start`, `npm run dev`, `npm test` and `npm run test:stack`: set up what is missing, start the local stack
@@ -64,9 +64,14 @@ export async function main(mode: Mode, args: string[], root: string): Promise<nu
 
   let lock: Lock | undefined;
   try {
-    const setup = bringUp(mode, profile, cleanups);
+    const abort = { aborted: false };
+    const setup = bringUp(mode, profile, cleanups, abort);
     const outcome = await Promise.race([setup.then(() => null), interruptedPromise]);
     if (outcome !== null) {
+      // Let the running step end first (a terminal Ctrl-C ends npm/next/apt children too), so nothing starts after
+      // the shutdown; give up waiting after a minute.
+      abort.aborted = true;
+      await Promise.race([setup.catch(() => undefined), new Promise((r) => setTimeout(r, 60_000))]);
       await shutdown(`${outcome} during set-up`);
       return 130;
     }
@@ -107,8 +112,13 @@ interface RunningStack {
   lock: Lock;
 }
 
-async function bringUp(mode: Mode, profile: Profile, cleanups: Cleanup[]): Promise<RunningStack> {
+async function bringUp(mode: Mode, profile: Profile, cleanups: Cleanup[], abort: { aborted: boolean }): Promise<RunningStack> {
   const root = profile.root;
+  /** A step that is not started once a signal asked us to stop. */
+  const step = <T>(name: string, fn: () => Promise<T>): Promise<T> => {
+    if (abort.aborted) return Promise.reject(new Error(`interrupted before ${name}`));
+    return runStep(name, fn);
+  };
   const lockId = createHash("sha256").update(profile.dataDir).digest("hex").slice(0, 12);
   const lock = lockOrFail(path.join(root, "node_modules", ".cache", "peelform", `stack-${lockId}.lock`), `the data folder ${profile.dataDir}`);
   cleanups.push({ name: "lock", fn: async () => lock.release() });
@@ -226,15 +236,37 @@ async function wipeTestData(profile: Profile): Promise<void> {
   if (location.fallbackReason) fs.rmSync(path.dirname(location.pgData), { recursive: true, force: true });
 }
 
+/**
+ * Without arguments the projects run one after another — unit, integration, e2e — each in its own vitest run, so
+ * the browser tests never share the machine's two cores (or the demo data) with the integration tests. With
+ * arguments (`npm test -- --project integration tests/integration/stack`) they go to one vitest run as given.
+ */
 async function runVitest(profile: Profile, env: Record<string, string>, args: string[]): Promise<{ code: number; summary: string | null }> {
-  const reportFile = path.join(profile.dataDir, "vitest-report.json");
   // vitest sets NODE_ENV=test itself; the app processes run as production.
   const { NODE_ENV: _appNodeEnv, ...testEnv } = childEnv({ ...env, PEELFORM_TEST_STACK: "1" });
-  const vitestArgs = ["run", "--reporter=default", "--reporter=json", `--outputFile.json=${reportFile}`, ...args];
-  const result = await step(`vitest ${args.length ? args.join(" ") : "(unit, integration, e2e)"}`, () =>
-    run(path.join(profile.root, "node_modules", ".bin", "vitest"), vitestArgs, { cwd: profile.root, env: testEnv as NodeJS.ProcessEnv, inherit: true, allowFailure: true }),
-  ).catch(() => ({ code: 1 }));
-  return { code: result.code, summary: summariseVitest(reportFile) };
+  const runs = args.length ? [{ label: args.join(" "), args }] : ["unit", "integration", "e2e"].map((p) => ({ label: p, args: ["--project", p] }));
+  const total: VitestCounts = { passed: 0, failed: 0, skipped: 0 };
+  let code = 0;
+  let counted = false;
+  for (const [i, r] of runs.entries()) {
+    const reportFile = path.join(profile.dataDir, `vitest-report-${i}.json`);
+    const vitestArgs = ["run", "--reporter=default", "--reporter=json", `--outputFile.json=${reportFile}`, ...r.args];
+    const result = await runStep(`vitest ${r.label}`, () =>
+      run(path.join(profile.root, "node_modules", ".bin", "vitest"), vitestArgs, { cwd: profile.root, env: testEnv as NodeJS.ProcessEnv, inherit: true, allowFailure: true }),
+    ).catch(() => ({ code: 1 }));
+    const counts = readVitestCounts(reportFile);
+    if (counts) {
+      counted = true;
+      total.passed += counts.passed;
+      total.failed += counts.failed;
+      total.skipped += counts.skipped;
+      info(`  ${r.label}: ${formatVitestCounts(counts).replace("vitest: ", "")}${result.code ? ` (exit ${result.code})` : ""}`);
+    } else if (result.code) {
+      total.failed += 1; // vitest could not even write its report
+    }
+    if (result.code !== 0) code = result.code;
+  }
+  return { code, summary: counted || code ? formatVitestCounts(total) : null };
 }
 
 function printLogTails(profile: Profile): void {

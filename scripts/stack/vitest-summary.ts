@@ -1,23 +1,38 @@
 import fs from "node:fs";
 
 /**
- * One plain closing line from vitest's JSON report, e.g. "vitest: 41 passed, 0 failed, 2 skipped", so a CI log
- * ends with the counts whatever the reporters printed above.
+ * Counts from vitest's JSON reports, e.g. "vitest: 41 passed, 0 failed, 2 skipped", so a CI log ends with one
+ * plain line of totals whatever the reporters printed above. A test file that fails to load (no test results but
+ * status "failed") counts as one failure.
  */
-export function summariseVitest(reportFile: string): string | null {
+export interface VitestCounts {
+  passed: number;
+  failed: number;
+  skipped: number;
+}
+
+interface Report {
+  numPassedTests?: number;
+  numFailedTests?: number;
+  numPendingTests?: number;
+  numTodoTests?: number;
+  testResults?: { status: string; assertionResults: unknown[] }[];
+}
+
+export function readVitestCounts(reportFile: string): VitestCounts | null {
   try {
-    const report = JSON.parse(fs.readFileSync(reportFile, "utf8")) as {
-      numPassedTests?: number;
-      numFailedTests?: number;
-      numPendingTests?: number;
-      numTodoTests?: number;
-      numFailedTestSuites?: number;
+    const report = JSON.parse(fs.readFileSync(reportFile, "utf8")) as Report;
+    const brokenFiles = (report.testResults ?? []).filter((r) => r.status === "failed" && r.assertionResults.length === 0).length;
+    return {
+      passed: report.numPassedTests ?? 0,
+      failed: (report.numFailedTests ?? 0) + brokenFiles,
+      skipped: (report.numPendingTests ?? 0) + (report.numTodoTests ?? 0),
     };
-    const skipped = (report.numPendingTests ?? 0) + (report.numTodoTests ?? 0);
-    // A test file that fails to load counts as a failure too.
-    const failed = (report.numFailedTests ?? 0) + (report.numFailedTestSuites ?? 0);
-    return `vitest: ${report.numPassedTests ?? 0} passed, ${failed} failed` + (skipped ? `, ${skipped} skipped` : "");
   } catch {
     return null;
   }
+}
+
+export function formatVitestCounts(counts: VitestCounts): string {
+  return `vitest: ${counts.passed} passed, ${counts.failed} failed` + (counts.skipped ? `, ${counts.skipped} skipped` : "");
 }
