@@ -66,6 +66,8 @@ export async function buildIfStale(root: string, env: NodeJS.ProcessEnv): Promis
       return false;
     }
     info(current ? "  sources changed since the last build: next build" : "  no build yet: next build");
+    // An interrupted build leaves .next half written: forget the old hash first, so it can never look current.
+    fs.rmSync(path.join(root, ".next", HASH_FILE), { force: true });
     await run(path.join(root, "node_modules", ".bin", "next"), ["build"], { cwd: root, env, inherit: true, timeoutMs: 30 * 60_000 });
     fs.writeFileSync(path.join(root, ".next", HASH_FILE), `${hash}\n`);
     return true;
