@@ -123,7 +123,7 @@ export function buildHalfEdges(triangles: Uint32Array, vertexCount: number): Hal
   };
 }
 
-/** Number of boundary loops (cycles of boundary half-edges). `scratch` is optional reusable #H bytes. */
+/** Number of boundary loops (cycles of boundary half-edges). */
 export function countBoundaryLoops(he: HalfEdgeMesh): number {
   const nh = 2 * he.edgeCount;
   const seen = new Uint8Array(nh);
