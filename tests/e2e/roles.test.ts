@@ -112,7 +112,7 @@ describe("screens per role", () => {
 
     // The old address now answers with the not-found screen.
     await b.goto(projectPath);
-    await page.getByText("This piece is not on the sheet.").waitFor();
+    await page.getByText("This project is not in your shop.").waitFor();
     expect(b.unexpectedProblems((p) => /status of 404/.test(p.text))).toEqual([]);
   });
 });
