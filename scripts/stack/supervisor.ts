@@ -19,6 +19,8 @@ export interface ChildSpec {
   /** Where its output goes: "console" prefixes each line with the name, otherwise the path of a log file. */
   output: "console" | string;
   runDir: string;
+  /** Where restart and stop notices go (default: the bootstrap's log). */
+  notify?: (message: string) => void;
 }
 
 export interface Supervised {
@@ -88,6 +90,8 @@ export function supervise(spec: ChildSpec): Supervised {
   const logStream = spec.output === "console" ? null : fs.createWriteStream(spec.output, { flags: "a" });
   const sink = (line: string) => (logStream ? logStream.write(line) : process.stdout.write(line));
   const prefix = spec.output === "console" ? `${spec.name.padEnd(6)} | ` : "";
+  const notice = spec.notify ?? warn;
+  const stopped = spec.notify ?? ((m: string) => info(`  ${m}`));
 
   const launch = () => {
     const startedAt = Date.now();
@@ -96,13 +100,13 @@ export function supervise(spec: ChildSpec): Supervised {
     if (c.pid) fs.writeFileSync(pidFile(spec.runDir, spec.name), `${c.pid}\n`);
     pipeLines(c.stdout, prefix, sink);
     pipeLines(c.stderr, prefix, sink);
-    c.on("error", (error) => warn(`${spec.name} could not start: ${error.message}`));
+    c.on("error", (error) => notice(`${spec.name} could not start: ${error.message}`));
     c.on("exit", (code, signal) => {
       fs.rmSync(pidFile(spec.runDir, spec.name), { force: true });
       const status = code ?? (signal ? `signal ${signal}` : "?");
       if (stopping) return;
       if (!spec.restart) {
-        warn(`${spec.name} exited (${status})`);
+        notice(`${spec.name} exited (${status})`);
         resolveExited(typeof code === "number" ? code : 1);
         return;
       }
@@ -110,7 +114,7 @@ export function supervise(spec: ChildSpec): Supervised {
       if (Date.now() - startedAt > 60_000) restartCount = 0;
       const delay = Math.min(30_000, 1000 * 2 ** restartCount);
       restartCount += 1;
-      warn(`${spec.name} exited (${status}); restarting in ${delay / 1000} s`);
+      notice(`${spec.name} exited (${status}); restarting in ${delay / 1000} s`);
       restartTimer = setTimeout(() => {
         restartTimer = undefined;
         if (!stopping) launch();
@@ -136,7 +140,7 @@ export function supervise(spec: ChildSpec): Supervised {
           c.kill("SIGTERM");
         }
         const timer = setTimeout(() => {
-          warn(`${spec.name} did not stop within ${timeoutMs / 1000} s; killing it`);
+          notice(`${spec.name} did not stop within ${timeoutMs / 1000} s; killing it`);
           try {
             process.kill(-c.pid!, "SIGKILL");
           } catch {
@@ -145,7 +149,7 @@ export function supervise(spec: ChildSpec): Supervised {
         }, timeoutMs);
         await done;
         clearTimeout(timer);
-        info(`  ${spec.name} stopped`);
+        stopped(`${spec.name} stopped`);
       }
       logStream?.end();
       resolveExited(0);

@@ -12,6 +12,7 @@ describe("scripts/stack/supervisor", () => {
 
   it("restarts a crashing child with growing delays and stops it on request", async () => {
     const log = path.join(runDir, "crash.log");
+    const notices: string[] = [];
     // Each start appends a line, then the process dies.
     const child = supervise({
       name: "crash",
@@ -22,6 +23,7 @@ describe("scripts/stack/supervisor", () => {
       restart: true,
       output: log,
       runDir,
+      notify: (m) => notices.push(m),
     });
     const startsFile = path.join(runDir, "starts");
     // Backoff 1 s then 2 s: the third start comes about 3 s after the first.
@@ -36,6 +38,7 @@ describe("scripts/stack/supervisor", () => {
     });
     expect(Date.now() - t0).toBeGreaterThanOrEqual(2_900);
     expect(child.restarts()).toBeGreaterThanOrEqual(2);
+    expect(notices.slice(0, 2)).toEqual(["crash exited (3); restarting in 1 s", "crash exited (3); restarting in 2 s"]);
     await child.stop(2_000);
     const starts = fs.readFileSync(startsFile, "utf8").length;
     await new Promise((r) => setTimeout(r, 1_500)); // long enough for a pending restart, had one been left
@@ -53,6 +56,7 @@ describe("scripts/stack/supervisor", () => {
       restart: true,
       output: path.join(runDir, "sleeper.log"),
       runDir,
+      notify: () => {},
     });
     const pid = child.pid()!;
     await child.stop(5_000);
