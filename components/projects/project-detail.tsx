@@ -3,6 +3,7 @@
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { Panel } from "@/components/ui/panel";
+import { ProjectScansSection } from "@/components/scans/project-scans-section";
 import { PageHeading } from "@/components/studio/page-heading";
 import { TextLink } from "@/components/ui/text-link";
 import { errorMessage } from "@/lib/client/api-fetch";
@@ -14,10 +15,22 @@ import { EditProjectForm } from "./edit-project-form";
 import { StatusBadge } from "./status-badge";
 
 /**
- * The project page: what exists for the build now (details, notes, where it stands), with edit and delete for
- * roles that may.
+ * The project page: what exists for the build now (details, notes, where it stands, its scans and patterns), with
+ * edit and delete for roles that may.
  */
-export function ProjectDetail({ initial, canEdit, canDelete }: { initial: Project; canEdit: boolean; canDelete: boolean }) {
+export function ProjectDetail({
+  initial,
+  canEdit,
+  canDelete,
+  canUpload,
+  canFlatten,
+}: {
+  initial: Project;
+  canEdit: boolean;
+  canDelete: boolean;
+  canUpload: boolean;
+  canFlatten: boolean;
+}) {
   const query = useProject(initial.id, initial);
   const [editing, setEditing] = useState(false);
   const project = query.data ?? initial;
@@ -53,7 +66,7 @@ export function ProjectDetail({ initial, canEdit, canDelete }: { initial: Projec
           <EditProjectForm project={project} onDone={() => setEditing(false)} />
         </Panel>
       ) : (
-        <div className="grid gap-6 lg:grid-cols-[2fr_1fr]">
+        <div className="grid items-start gap-6 lg:grid-cols-[2fr_1fr]">
           <Panel title="Notes">
             {project.notes ? (
               <p className="whitespace-pre-wrap break-words text-sm leading-relaxed">{project.notes}</p>
@@ -84,6 +97,7 @@ export function ProjectDetail({ initial, canEdit, canDelete }: { initial: Projec
           </div>
         </div>
       )}
+      {editing ? null : <ProjectScansSection projectId={project.id} canUpload={canUpload} canFlatten={canFlatten} />}
     </>
   );
 }

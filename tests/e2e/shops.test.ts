@@ -32,6 +32,7 @@ describe("several shops: invitation for an existing account and the shop switche
     await page.getByLabel("Shop name").fill(ownShop);
     await page.getByRole("button", { name: "Create shop and sign in" }).click();
     await page.waitForURL(/\/projects$/, { timeout: 30_000 });
+    await page.getByRole("heading", { level: 1, name: "Projects" }).waitFor();
     expect(await page.getByRole("combobox", { name: "Active shop" }).count()).toBe(0);
     await b.signOut();
 
@@ -59,6 +60,7 @@ describe("several shops: invitation for an existing account and the shop switche
     await page.getByLabel("Your password").fill(password);
     await page.getByRole("button", { name: "Join the shop" }).click();
     await page.waitForURL(/\/projects$/, { timeout: 30_000 });
+    await page.getByRole("heading", { level: 1, name: "Projects" }).waitFor();
     await waitForHeaderShop(page, demoShop);
     expect(await headerRole(page)).toBe("Designer");
     expect(await page.getByRole("button", { name: "New project" }).count()).toBe(1);

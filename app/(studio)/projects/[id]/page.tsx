@@ -42,6 +42,8 @@ export default async function ProjectPage({ params }: { params: Params }) {
       initial={project}
       canEdit={can(session.role, "project:update")}
       canDelete={can(session.role, "project:delete")}
+      canUpload={can(session.role, "scan:upload")}
+      canFlatten={can(session.role, "flatten:run")}
     />
   );
 }
