@@ -10,6 +10,7 @@ import { readMesh } from "@/lib/geometry/intake/read-mesh";
 import { resolveSeams } from "@/lib/geometry/seams/parse-seams";
 import { flattenMesh } from "@/lib/geometry/pipeline/flatten-mesh";
 import { renderPatternPdf, renderPatternSvg } from "@/lib/patterns";
+import { patternDocumentInput } from "@/lib/patterns-store/document-input";
 import type { ComputeRequest, FlattenResponse, IntakeResponse, ThreadMessage } from "./compute-messages";
 
 const post = (m: ThreadMessage, transfer: ArrayBuffer[] = []) => parentPort!.postMessage(m, transfer);
@@ -34,12 +35,7 @@ async function run(req: ComputeRequest): Promise<void> {
   const seamEdges = resolveSeams(req.seams, intake);
   post({ type: "progress", step: "parsed", fraction: 0 });
   const flat = flattenMesh(intake, seamEdges, req.options, (step, fraction) => post({ type: "progress", step, fraction }));
-  const labels = flat.report.pieces.map((p) => p.label);
-  const input = {
-    report: flat.report,
-    meta: req.meta,
-    assembly: { positions: req.positions, triangles: req.triangles, facePiece: flat.facePiece, labels },
-  };
+  const input = patternDocumentInput(flat.report, flat.facePiece, intake.mesh, req.meta);
   const svg = renderPatternSvg(input);
   post({ type: "progress", step: "svg", fraction: 1 });
   const pdf = await renderPatternPdf(input, { paper: req.paper, overlapMm: req.overlapMm });
