@@ -1,13 +1,13 @@
-import { Worker } from "bullmq";
-import type { Redis } from "ioredis";
 import { getEnv } from "@/lib/env";
-import { createRedis } from "@/lib/queue/connection";
+import { queueSettings } from "@/lib/jobs/queue-settings";
+import { startQueueWorkers } from "@/lib/jobs/start-workers";
 import { PROCESSORS } from "./registry";
 
 /**
- * The worker process: one BullMQ Worker per registered queue, all in this process. Stateless: run as many of these
- * on as many machines as needed against one Redis and one PostgreSQL. SIGTERM/SIGINT finish the running jobs
- * (worker.close waits for them) and exit 0.
+ * The worker process: one BullMQ Worker per registered queue (workers/registry.ts), all in this process, with
+ * QUEUE_PREFIX and the lock/stalled timing of lib/jobs/queue-settings.ts. Stateless: run as many of these on as many
+ * machines as needed against one Redis and one PostgreSQL. SIGTERM/SIGINT let running jobs finish
+ * (worker.close()) and exit 0; a crash exits non-zero, and `npm start` restarts the process with backoff.
  */
 function log(message: string): void {
   process.stdout.write(`${new Date().toISOString()} worker[${process.pid}] ${message}\n`);
@@ -15,20 +15,8 @@ function log(message: string): void {
 
 async function main(): Promise<void> {
   const env = getEnv();
-  const connections: Redis[] = [];
-  const workers = PROCESSORS.map(({ queue, processor, concurrency }) => {
-    const connection = createRedis();
-    connections.push(connection);
-    const worker = new Worker(queue, processor, { connection, concurrency: concurrency ?? env.WORKER_CONCURRENCY });
-    worker.on("error", (error) => log(`${queue}: ${error.message}`));
-    worker.on("failed", (job, error) =>
-      log(`${queue}: job ${job?.id ?? "?"} failed (attempt ${job?.attemptsMade ?? "?"}): ${error.message}`),
-    );
-    worker.on("completed", (job) => log(`${queue}: job ${job.id} done`));
-    return worker;
-  });
-  await Promise.all(workers.map((w) => w.waitUntilReady()));
-  log(`ready: ${PROCESSORS.map((p) => p.queue).join(", ")} (concurrency ${env.WORKER_CONCURRENCY})`);
+  const { close } = await startQueueWorkers(PROCESSORS, log);
+  log(`ready: ${PROCESSORS.map((p) => p.queue).join(", ")} (concurrency ${env.WORKER_CONCURRENCY}, prefix ${queueSettings().QUEUE_PREFIX})`);
 
   let closing = false;
   const shutdown = async (signal: string) => {
@@ -39,8 +27,7 @@ async function main(): Promise<void> {
       log("jobs did not finish within 30 s; exiting");
       process.exit(1);
     }, 30_000);
-    await Promise.all(workers.map((w) => w.close()));
-    await Promise.all(connections.map((c) => c.quit().catch(() => undefined)));
+    await close();
     clearTimeout(timer);
     log("stopped");
     process.exit(0);

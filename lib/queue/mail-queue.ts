@@ -1,6 +1,7 @@
 import { Queue } from "bullmq";
 import type { Redis } from "ioredis";
 import { mailMessageSchema, type MailMessage } from "@/lib/mail/send-mail";
+import { queueSettings } from "@/lib/jobs/queue-settings";
 import { createRedis, QUEUE_NAMES } from "./connection";
 
 /**
@@ -25,7 +26,8 @@ let connection: Redis | undefined;
 export function getMailQueue(): Queue {
   if (!queue) {
     connection = createRedis();
-    queue = new Queue(QUEUE_NAMES.mail, { connection });
+    // Same key prefix as the workers (QUEUE_PREFIX), or they would never see the job.
+    queue = new Queue(QUEUE_NAMES.mail, { connection, prefix: queueSettings().QUEUE_PREFIX });
   }
   return queue;
 }

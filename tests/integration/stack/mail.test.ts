@@ -5,6 +5,7 @@ import path from "node:path";
 import { QueueEvents } from "bullmq";
 import { afterAll, describe, expect, it } from "vitest";
 import { clearEnvCache, getEnv } from "@/lib/env";
+import { queueSettings } from "@/lib/jobs/queue-settings";
 import { listMailbox, MailboxDisabledError, readMailboxMessage } from "@/lib/mail/mailbox";
 import { sendMail } from "@/lib/mail/send-mail";
 import { createRedis, QUEUE_NAMES } from "@/lib/queue/connection";
@@ -47,7 +48,7 @@ describe("mail: sendMail → SMTP fake → .eml → mailbox", () => {
   it("delivers a queued message through the worker process", async () => {
     const subject = `Pattern approved ${randomBytes(4).toString("hex")}`;
     const connection = createRedis();
-    const events = new QueueEvents(QUEUE_NAMES.mail, { connection });
+    const events = new QueueEvents(QUEUE_NAMES.mail, { connection, prefix: queueSettings().QUEUE_PREFIX });
     try {
       const completed = new Set<string>();
       const failures = new Map<string, string>();
