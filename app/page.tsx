@@ -2,6 +2,7 @@ import { getServerSession } from "next-auth";
 import { redirect } from "next/navigation";
 import { Wordmark } from "@/components/brand/wordmark";
 import { ProductIntro } from "@/components/landing/product-intro";
+import { SafetyFooter } from "@/components/studio/safety-footer";
 import { TextLink } from "@/components/ui/text-link";
 import { authOptions } from "@/lib/auth/auth-options";
 
@@ -21,6 +22,7 @@ export default async function LandingPage() {
       <main id="main" className="flex-1">
         <ProductIntro />
       </main>
+      <SafetyFooter />
     </div>
   );
 }

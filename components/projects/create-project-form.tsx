@@ -2,6 +2,7 @@
 
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useRouter } from "next/navigation";
+import { useEffect } from "react";
 import { useForm } from "react-hook-form";
 import type { z } from "zod";
 import { Button } from "@/components/ui/button";
@@ -21,6 +22,9 @@ export function CreateProjectForm({ onDone }: { onDone: () => void }) {
     defaultValues: { name: "", client: "", dueDate: "", notes: "", status: "planning" },
   });
   const { errors, isSubmitting } = form.formState;
+  const { setFocus } = form;
+  // The form opens on a button press: move focus into it for keyboard and screen-reader users.
+  useEffect(() => setFocus("name"), [setFocus]);
 
   const onSubmit = form.handleSubmit(async (values) => {
     try {

@@ -1,6 +1,7 @@
 "use client";
 
 import { zodResolver } from "@hookform/resolvers/zod";
+import { useEffect } from "react";
 import { useForm } from "react-hook-form";
 import type { z } from "zod";
 import { Button } from "@/components/ui/button";
@@ -26,6 +27,9 @@ export function EditProjectForm({ project, onDone }: { project: Project; onDone:
     },
   });
   const { errors, isSubmitting } = form.formState;
+  const { setFocus } = form;
+  // The form opens on a button press: move focus into it for keyboard and screen-reader users.
+  useEffect(() => setFocus("name"), [setFocus]);
 
   const onSubmit = form.handleSubmit(async (values) => {
     try {

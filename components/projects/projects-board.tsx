@@ -21,7 +21,7 @@ export function ProjectsBoard({ shopName, canCreate, initial }: { shopName: stri
         lead="Every build the shop is working on."
         actions={
           canCreate && !creating ? (
-            <Button ref={newButton} onClick={() => setCreating(true)} aria-expanded={creating} aria-controls="new-project-panel">
+            <Button ref={newButton} onClick={() => setCreating(true)}>
               <span aria-hidden="true">+</span> New project
             </Button>
           ) : null
