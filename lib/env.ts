@@ -27,6 +27,23 @@ const optionalText = z
   .optional()
   .transform((v) => (v === undefined || v.trim() === "" ? undefined : v));
 
+/** A whole number in [min, max], or undefined when unset or empty. */
+const optionalInt = (min: number, max: number) =>
+  optionalText.pipe(
+    z
+      .string()
+      .optional()
+      .transform((v, ctx): number | undefined => {
+        if (v === undefined) return undefined;
+        const n = Number(v);
+        if (!Number.isInteger(n) || n < min || n > max) {
+          ctx.addIssue({ code: "custom", message: `expected a whole number from ${min} to ${max}` });
+          return z.NEVER;
+        }
+        return n;
+      }),
+  );
+
 const httpUrl = (example: string) =>
   z.url({ protocol: /^https?$/, message: `expected an http(s) URL such as ${example}` });
 
@@ -57,6 +74,15 @@ export const envSchema = z
     MAIL_DIR: optionalText,
     PEELFORM_DATA_DIR: optionalText,
     DEV_MAILBOX: flag.default(false),
+    // Queue settings (read by lib/jobs/queue-settings.ts; validated here too, so a bad value stops a process at
+    // start-up with the others): BullMQ key prefix, job lock and stalled-check timing, per-queue concurrency,
+    // upload size limit.
+    QUEUE_PREFIX: optionalText.pipe(z.string().regex(/^[A-Za-z0-9_-]{1,40}$/, "expected 1-40 letters, digits, _ or -").optional()).transform((v) => v ?? "bull"),
+    JOB_LOCK_DURATION_MS: optionalInt(1_000, 3_600_000),
+    JOB_STALLED_INTERVAL_MS: optionalInt(500, 3_600_000),
+    FLATTEN_CONCURRENCY: optionalInt(1, 64),
+    SCAN_INTAKE_CONCURRENCY: optionalInt(1, 64),
+    SCAN_MAX_BYTES: optionalInt(1024, 4 * 1024 * 1024 * 1024).transform((v) => v ?? 300 * 1024 * 1024),
     WORKER_CONCURRENCY: z.coerce.number({ message: "expected a number" }).int("expected a whole number").min(1, "must be at least 1").max(64, "must be at most 64").default(2),
   })
   .superRefine((env, ctx) => {

@@ -63,6 +63,17 @@ describe("lib/env parseEnv", () => {
     expect(message).not.toContain("REDIS_URL");
   });
 
+  it("validates the queue settings with defaults", () => {
+    const env = parseEnv(valid);
+    expect(env.QUEUE_PREFIX).toBe("bull");
+    expect(env.SCAN_MAX_BYTES).toBe(300 * 1024 * 1024);
+    expect(env.FLATTEN_CONCURRENCY).toBeUndefined();
+    const message = problems({ ...valid, QUEUE_PREFIX: "two words", JOB_LOCK_DURATION_MS: "10", FLATTEN_CONCURRENCY: "1.5" });
+    expect(message).toContain("- QUEUE_PREFIX: expected 1-40 letters, digits, _ or -");
+    expect(message).toContain("- JOB_LOCK_DURATION_MS: expected a whole number from 1000 to 3600000");
+    expect(message).toContain("- FLATTEN_CONCURRENCY: expected a whole number from 1 to 64");
+  });
+
   it("checks combinations", () => {
     expect(problems({ ...valid, MAIL_DIR: "" })).toContain("- MAIL_DIR: required when DEV_MAILBOX is on");
     expect(problems({ ...valid, SMTP_USER: "relay" })).toContain("- SMTP_PASS: required when SMTP_USER is set");
