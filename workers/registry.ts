@@ -18,6 +18,19 @@ export interface ProcessorEntry {
 
 export const PROCESSORS: ProcessorEntry[] = [
   { queue: QUEUE_NAMES.mail, processor: processSendMail },
-  { queue: QUEUE_NAMES.scanIntake, processor: processScanIntakeJob, concurrency: queueSettings().SCAN_INTAKE_CONCURRENCY },
-  { queue: QUEUE_NAMES.flatten, processor: processFlattenJob, concurrency: queueSettings().FLATTEN_CONCURRENCY },
+  // concurrency read when the workers start (getters), so importing the registry never reads the environment
+  {
+    queue: QUEUE_NAMES.scanIntake,
+    processor: processScanIntakeJob,
+    get concurrency() {
+      return queueSettings().SCAN_INTAKE_CONCURRENCY;
+    },
+  },
+  {
+    queue: QUEUE_NAMES.flatten,
+    processor: processFlattenJob,
+    get concurrency() {
+      return queueSettings().FLATTEN_CONCURRENCY;
+    },
+  },
 ];
