@@ -27,7 +27,8 @@ export function PatternsPanel({ projectId }: { projectId: string }) {
             <p className="text-xs text-kraft-700">{formatTimestamp(p.createdAt)}</p>
             {p.status === "failed" && p.error ? <p className="text-xs text-ember-700">{p.error}</p> : null}
             {p.downloads ? (
-              <p className="flex gap-4 text-sm">
+              <p className="flex flex-wrap gap-4 text-sm">
+                <a className="font-bold underline" href={`/patterns/${p.id}`}>Open pattern</a>
                 <a className="underline" href={p.downloads.pdf}>PDF</a>
                 <a className="underline" href={p.downloads.svg}>SVG</a>
                 <a className="underline" href={p.downloads.json}>Report (JSON)</a>
