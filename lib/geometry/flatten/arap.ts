@@ -1,5 +1,6 @@
 import type { SolverStats } from "../report-types";
-import { factorLdlt, solveLdltPair } from "../sparse/ldlt";
+import type { CsrMatrix } from "../sparse/csr-matrix";
+import { factorLdlt, solveLdltPair, type LdltFactor } from "../sparse/ldlt";
 import { csrFromTriplets, TripletList } from "../sparse/triplets";
 import type { TriangleFrames } from "./triangle-frames";
 
@@ -10,6 +11,62 @@ export interface ArapOptions {
   tolerance?: number;
   /** reject or shorten steps that flip triangles; default true (false only to measure what the guard prevents) */
   flipGuard?: boolean;
+  /**
+   * The global-step system from arapSystem (same triangles, frames, order) and its factor, e.g. started early on
+   * another thread (factorLdltInThread); both are computed here when omitted.
+   */
+  prepared?: { system: ArapSystem; factor: { join(): LdltFactor } };
+}
+
+/** Global-step system of the refinement: cotan Laplacian with one vertex pinned, rows in fill-reducing order. */
+export interface ArapSystem {
+  /** the pinned vertex: the last one in the fill-reducing order */
+  pin: number;
+  /** #V: row of each vertex, −1 for the pin */
+  freeIndex: Int32Array;
+  /** the pinned Laplacian, (#V−1)×(#V−1) */
+  lap: CsrMatrix;
+  /** L_{i,pin} per free row */
+  pinCoupling: Float64Array;
+  /** Σ |w|·|Δx|² over corners (units²), for an absolute stopping floor */
+  scaleRef: number;
+}
+
+/**
+ * Assembles the ARAP global-step matrix. It depends on the 3D geometry only (not on the start map), so it can be
+ * built and factorised before or while LSCM runs.
+ *
+ * @param triangles #F×3
+ * @param frames triangle frames and cotangents
+ * @param order perm[new] = old vertex (fill-reducing)
+ */
+export function arapSystem(triangles: Uint32Array, frames: TriangleFrames, order: Uint32Array): ArapSystem {
+  const nv = order.length;
+  const nf = triangles.length / 3;
+  const { local, cot } = frames;
+  const pin = order[nv - 1];
+  const freeIndex = new Int32Array(nv).fill(-1);
+  let nFree = 0;
+  for (let k = 0; k < nv; k++) if (order[k] !== pin) freeIndex[order[k]] = nFree++;
+  const trip = new TripletList(12 * nf);
+  const pinCoupling = new Float64Array(nFree);
+  let scaleRef = 0;
+  for (let f = 0; f < nf; f++) {
+    const a = local[3 * f], bx = local[3 * f + 1], by = local[3 * f + 2];
+    for (let k = 0; k < 3; k++) {
+      const i = triangles[3 * f + ((k + 1) % 3)], j = triangles[3 * f + ((k + 2) % 3)];
+      const w = 0.5 * cot[3 * f + k];
+      const fi = freeIndex[i], fj = freeIndex[j];
+      if (fi >= 0) trip.add(fi, fi, w);
+      if (fj >= 0) trip.add(fj, fj, w);
+      if (fi >= 0 && fj >= 0) { trip.add(fi, fj, -w); trip.add(fj, fi, -w); }
+      else if (fi >= 0) pinCoupling[fi] -= w;
+      else if (fj >= 0) pinCoupling[fj] -= w;
+      const ex = k === 0 ? bx - a : k === 1 ? -bx : a, ey = k === 0 ? by : k === 1 ? -by : 0;
+      scaleRef += Math.abs(w) * (ex * ex + ey * ey);
+    }
+  }
+  return { pin, freeIndex, lap: csrFromTriplets(nFree, trip), pinCoupling, scaleRef };
 }
 
 export interface ArapResult {
@@ -66,32 +123,12 @@ export function arapRefine(
   const nv = uv0.length / 2;
   const nf = triangles.length / 3;
   const { local, cot } = frames;
-  const pin = order[nv - 1];
-  const freeIndex = new Int32Array(nv).fill(-1);
-  let nFree = 0;
-  for (let k = 0; k < nv; k++) if (order[k] !== pin) freeIndex[order[k]] = nFree++;
+  const system = opts.prepared?.system ?? arapSystem(triangles, frames, order);
+  const { pin, freeIndex, pinCoupling, scaleRef } = system;
+  const nFree = system.lap.n;
+  const factor = opts.prepared ? opts.prepared.factor.join() : factorLdlt(system.lap);
   const uv = Float64Array.from(uv0);
   const pinU = uv[2 * pin], pinV = uv[2 * pin + 1];
-  const trip = new TripletList(12 * nf);
-  const pinCoupling = new Float64Array(nFree); // L_{i,pin}
-  let scaleRef = 0; // Σ w |Δx|², for an absolute stopping floor
-  for (let f = 0; f < nf; f++) {
-    const a = local[3 * f], bx = local[3 * f + 1], by = local[3 * f + 2];
-    for (let k = 0; k < 3; k++) {
-      const i = triangles[3 * f + ((k + 1) % 3)], j = triangles[3 * f + ((k + 2) % 3)];
-      const w = 0.5 * cot[3 * f + k];
-      const fi = freeIndex[i], fj = freeIndex[j];
-      if (fi >= 0) trip.add(fi, fi, w);
-      if (fj >= 0) trip.add(fj, fj, w);
-      if (fi >= 0 && fj >= 0) { trip.add(fi, fj, -w); trip.add(fj, fi, -w); }
-      else if (fi >= 0) pinCoupling[fi] -= w;
-      else if (fj >= 0) pinCoupling[fj] -= w;
-      const ex = k === 0 ? bx - a : k === 1 ? -bx : a, ey = k === 0 ? by : k === 1 ? -by : 0;
-      scaleRef += Math.abs(w) * (ex * ex + ey * ey);
-    }
-  }
-  const lap = csrFromTriplets(nFree, trip);
-  const factor = factorLdlt(lap);
   const rot = new Float64Array(2 * nf); // cos, sin per triangle
   const bu = new Float64Array(nFree), bv = new Float64Array(nFree);
   const xu = new Float64Array(nFree), xv = new Float64Array(nFree);

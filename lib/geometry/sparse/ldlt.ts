@@ -21,11 +21,28 @@ export interface LdltFactor {
 }
 
 /**
+ * Symbolic part of the factorisation: the upper triangle of P·A·Pᵀ in CSC, the elimination tree and the column
+ * pointers of L. Everything the numeric part needs, as flat typed arrays (so it can be handed to another thread).
+ */
+export interface LdltSymbolic {
+  n: number;
+  perm: Uint32Array;
+  /** upper triangle of P·A·Pᵀ, CSC: column j holds rows i ≤ j */
+  cp: Uint32Array;
+  ci: Uint32Array;
+  cx: Float64Array;
+  /** elimination tree, −1 for a root */
+  parent: Int32Array;
+  /** n+1 column pointers of L */
+  lp: Uint32Array;
+  nnzL: number;
+}
+
+/**
  * @param a symmetric matrix, both triangles stored
  * @param perm fill-reducing ordering, perm[new] = old (identity when omitted)
- * @throws GeometryError SOLVER_FAILED when a pivot is not positive (matrix not positive definite)
  */
-export function factorLdlt(a: CsrMatrix, perm?: Uint32Array): LdltFactor {
+export function analyseLdlt(a: CsrMatrix, perm?: Uint32Array): LdltSymbolic {
   const n = a.n;
   const p = perm ?? Uint32Array.from({ length: n }, (_, i) => i);
   const pinv = invertPermutation(p);
@@ -49,7 +66,7 @@ export function factorLdlt(a: CsrMatrix, perm?: Uint32Array): LdltFactor {
       if (i <= j) { const k = fill[j]++; ci[k] = i; cx[k] = a.values[q]; }
     }
   }
-  // symbolic: elimination tree and column counts
+  // elimination tree and column counts
   const parent = new Int32Array(n);
   const flag = new Int32Array(n);
   const lnz = new Uint32Array(n);
@@ -67,10 +84,17 @@ export function factorLdlt(a: CsrMatrix, perm?: Uint32Array): LdltFactor {
   }
   const lp = new Uint32Array(n + 1);
   for (let k = 0; k < n; k++) lp[k + 1] = lp[k] + lnz[k];
-  const nnzL = lp[n];
-  const li = new Uint32Array(nnzL);
-  const lx = new Float64Array(nnzL);
-  const d = new Float64Array(n);
+  return { n, perm: p, cp, ci, cx, parent, lp, nnzL: lp[n] };
+}
+
+/**
+ * Numeric part (up-looking by rows, Davis 2005): fills li, lx (length nnzL) and d (length n).
+ * @returns −1 on success, else the index of the first pivot that is not positive
+ */
+export function factorLdltNumeric(s: LdltSymbolic, li: Uint32Array, lx: Float64Array, d: Float64Array): number {
+  const { n, cp, ci, cx, parent, lp } = s;
+  const flag = new Int32Array(n);
+  const lnz = new Uint32Array(n);
   const y = new Float64Array(n);
   const pattern = new Int32Array(n);
   let maxDiag = 0;
@@ -101,12 +125,30 @@ export function factorLdlt(a: CsrMatrix, perm?: Uint32Array): LdltFactor {
       lx[p2] = lki;
       lnz[i]++;
     }
-    if (!(dk > 1e-14 * maxDiag) || !Number.isFinite(dk)) {
-      throw new GeometryError("SOLVER_FAILED", `Sparse factorisation failed at pivot ${k} of ${n}: the system is not positive definite (degenerate or badly connected triangles?).`);
-    }
+    if (!(dk > 1e-14 * maxDiag) || !Number.isFinite(dk)) return k;
     d[k] = dk;
   }
-  return { n, perm: p, lp, li, lx, d, nnzL };
+  return -1;
+}
+
+/** The error factorLdlt throws for a pivot that is not positive. */
+export function notPositiveDefinite(pivot: number, n: number): GeometryError {
+  return new GeometryError("SOLVER_FAILED", `Sparse factorisation failed at pivot ${pivot} of ${n}: the system is not positive definite (degenerate or badly connected triangles?).`);
+}
+
+/**
+ * @param a symmetric matrix, both triangles stored
+ * @param perm fill-reducing ordering, perm[new] = old (identity when omitted)
+ * @throws GeometryError SOLVER_FAILED when a pivot is not positive (matrix not positive definite)
+ */
+export function factorLdlt(a: CsrMatrix, perm?: Uint32Array): LdltFactor {
+  const s = analyseLdlt(a, perm);
+  const li = new Uint32Array(s.nnzL);
+  const lx = new Float64Array(s.nnzL);
+  const d = new Float64Array(s.n);
+  const bad = factorLdltNumeric(s, li, lx, d);
+  if (bad >= 0) throw notPositiveDefinite(bad, s.n);
+  return { n: s.n, perm: s.perm, lp: s.lp, li, lx, d, nnzL: s.nnzL };
 }
 
 /**
