@@ -14,7 +14,7 @@ const DIM_MIX = 0.75;
 
 /**
  * Non-indexed geometry (3 vertices per face) so every face has its own colour, centred on the origin.
- * @returns the geometry and the radius of its bounding sphere (scan units)
+ * @returns the geometry and the largest distance of a vertex from the box centre (scan units)
  */
 function buildGeometry(mesh: TriMesh): { geometry: BufferGeometry; radius: number } {
   const { positions: p, triangles: t } = mesh;
@@ -31,17 +31,20 @@ function buildGeometry(mesh: TriMesh): { geometry: BufferGeometry; radius: numbe
   }
   const cx = (minX + maxX) / 2, cy = (minY + maxY) / 2, cz = (minZ + maxZ) / 2;
   const out = new Float32Array(9 * f);
+  let r2 = 0;
   for (let i = 0; i < t.length; i++) {
     const v = 3 * t[i];
-    out[3 * i] = p[v] - cx;
-    out[3 * i + 1] = p[v + 1] - cy;
-    out[3 * i + 2] = p[v + 2] - cz;
+    const x = p[v] - cx, y = p[v + 1] - cy, z = p[v + 2] - cz;
+    out[3 * i] = x;
+    out[3 * i + 1] = y;
+    out[3 * i + 2] = z;
+    if (x * x + y * y + z * z > r2) r2 = x * x + y * y + z * z;
   }
   const geometry = new BufferGeometry();
   geometry.setAttribute("position", new BufferAttribute(out, 3));
   geometry.setAttribute("color", new BufferAttribute(new Float32Array(9 * f), 3));
   geometry.computeVertexNormals();
-  const radius = Math.max(1e-9, Math.hypot(maxX - minX, maxY - minY, maxZ - minZ) / 2);
+  const radius = Math.max(1e-9, Math.sqrt(r2));
   return { geometry, radius };
 }
 
@@ -83,10 +86,11 @@ export function ScanHeatCanvas({ mesh, faces, limit, selected }: { mesh: TriMesh
   useEffect(() => paint(geometry, faces, limit, selected), [geometry, faces, limit, selected]);
 
   return (
+    // About 3.2 radii out: the bounding sphere fits the 40° view with a margin from the starting angle.
     <Canvas
       data-testid="scan-heat-canvas"
       gl={{ preserveDrawingBuffer: true, antialias: true }}
-      camera={{ position: [radius * 1.6, radius * 1.1, radius * 2.2], near: radius / 100, far: radius * 100, fov: 40 }}
+      camera={{ position: [radius * 1.78, radius * 1.19, radius * 2.38], near: radius / 100, far: radius * 100, fov: 40 }}
       className="bg-kraft-100"
       aria-label="Scan coloured by stretch"
     >
