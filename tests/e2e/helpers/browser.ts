@@ -21,6 +21,8 @@ export class E2eBrowser {
     readonly base: string,
   ) {
     const page = session.page;
+    // The machine is shared and small: allow slow first responses (a cold server, a busy CPU).
+    page.setDefaultNavigationTimeout(60_000);
     page.on("console", (msg: ConsoleMessage) => {
       if (msg.type() === "error") this.problems.push({ kind: "console", text: msg.text(), url: msg.location().url });
     });
