@@ -4,8 +4,9 @@
  *
  * The plane is { axis, offset } in scan coordinates (x = offset for axis "x"), the same convention as
  * lib/geometry/layout/mirror-plane.ts; `fitMirrorPlane` puts it through the bounding-box centre on that axis.
- * Partners are found with a uniform spatial hash (cell = tolerance, 27 neighbouring cells per query, nearest vertex
- * within the tolerance wins), O(#V) expected.
+ * Partners are found with a uniform spatial hash (cell = 2 × tolerance, so the tolerance ball around a query meets
+ * at most 2 × 2 × 2 cells: the query's cell and the nearer neighbour on each axis; nearest vertex within the
+ * tolerance wins), O(#V) expected.
  */
 import type { SeamPathFinder } from "./seam-path";
 import { edgeBetween, type StudioMesh } from "./studio-mesh";
@@ -61,6 +62,7 @@ export function mirrorVertices(sm: StudioMesh, spec: MirrorPlaneSpec): VertexMir
   const tol = frac * (sm.diagonal > 0 ? sm.diagonal : 1);
   const nv = sm.vertexCount;
   const p = sm.mesh.positions;
+  const cell = 2 * tol;
   let cap = 1;
   while (cap < 2 * nv) cap <<= 1;
   const mask = cap - 1;
@@ -68,7 +70,7 @@ export function mirrorVertices(sm: StudioMesh, spec: MirrorPlaneSpec): VertexMir
   const start = new Uint32Array(cap + 1);
   for (let v = 0; v < nv; v++) {
     if (!sm.referenced[v]) continue;
-    const h = cellHash(Math.floor(p[3 * v] / tol), Math.floor(p[3 * v + 1] / tol), Math.floor(p[3 * v + 2] / tol), mask);
+    const h = cellHash(Math.floor(p[3 * v] / cell), Math.floor(p[3 * v + 1] / cell), Math.floor(p[3 * v + 2] / cell), mask);
     cellOf[v] = h;
     start[h + 1]++;
   }
@@ -86,10 +88,13 @@ export function mirrorVertices(sm: StudioMesh, spec: MirrorPlaneSpec): VertexMir
     if (!sm.referenced[v]) continue;
     q[0] = p[3 * v]; q[1] = p[3 * v + 1]; q[2] = p[3 * v + 2];
     q[k] = 2 * offset - q[k];
-    const cx = Math.floor(q[0] / tol), cy = Math.floor(q[1] / tol), cz = Math.floor(q[2] / tol);
+    const fx = q[0] / cell, fy = q[1] / cell, fz = q[2] / cell;
+    const cx = Math.floor(fx), cy = Math.floor(fy), cz = Math.floor(fz);
+    // the neighbour cell on the side of the query point: −1 when it sits in the lower half of its cell
+    const sx = fx - cx < 0.5 ? -1 : 1, sy = fy - cy < 0.5 ? -1 : 1, sz = fz - cz < 0.5 ? -1 : 1;
     let best = -1, bestD = tol2;
-    for (let dx = -1; dx <= 1; dx++) for (let dy = -1; dy <= 1; dy++) for (let dz = -1; dz <= 1; dz++) {
-      const h = cellHash(cx + dx, cy + dy, cz + dz, mask);
+    for (let i = 0; i < 8; i++) {
+      const h = cellHash(cx + (i & 1 ? sx : 0), cy + (i & 2 ? sy : 0), cz + (i & 4 ? sz : 0), mask);
       for (let i = start[h]; i < start[h + 1]; i++) {
         const w = bucket[i];
         const ex = p[3 * w] - q[0], ey = p[3 * w + 1] - q[1], ez = p[3 * w + 2] - q[2];

@@ -58,6 +58,7 @@ export function createSeamPathFinder(sm: StudioMesh): SeamPathFinder {
   const heap = new MinHeap(2 * sm.edgeCount + 2);
   const edgeCost = new Float64Array(sm.edgeCount);
   let costKey = ""; // options the edgeCost array was filled for
+  let sharpCount = 0; // sharp edges under those options
   let gen = 0;
 
   const prepareCosts = (opts: SeamPathOptions): number => {
@@ -68,13 +69,16 @@ export function createSeamPathFinder(sm: StudioMesh): SeamPathFinder {
     if (snap && !(thr >= 0 && thr < 180)) throw new RangeError(`sharpThresholdDeg must be in [0, 180) (got ${thr}).`);
     const key = snap ? `s${thr}:${factor}` : "plain";
     if (key !== costKey) {
+      sharpCount = 0;
       for (let e = 0; e < edgeCost.length; e++) {
-        const d = dihedral[e];
-        edgeCost[e] = snap && Math.abs(d - 180) > thr ? edgeLength[e] * factor : edgeLength[e];
+        const sharp = snap && Math.abs(dihedral[e] - 180) > thr;
+        edgeCost[e] = sharp ? edgeLength[e] * factor : edgeLength[e];
+        if (sharp) sharpCount++;
       }
       costKey = key;
     }
-    return snap ? factor : 1;
+    // with no sharp edge every cost is the length, and the full straight-line heuristic stays a lower bound
+    return snap && sharpCount > 0 ? factor : 1;
   };
 
   const checkVertex = (v: number, what: string) => {

@@ -3,6 +3,8 @@ import { cube } from "@/lib/geometry/shapes/cube";
 import { cylinderTube } from "@/lib/geometry/shapes/cylinder-tube";
 import { foldedSheet } from "@/lib/geometry/shapes/folded-sheet";
 import { uvSphere } from "@/lib/geometry/shapes/uv-sphere";
+import { cutPieces } from "@/lib/geometry/topology/cut-pieces";
+import { flattenPiece } from "@/lib/geometry/flatten/flatten-piece";
 import { computeLivePieces } from "@/lib/studio/live-pieces";
 import { SeamSet } from "@/lib/studio/seam-set";
 import { suggestSharpSeams } from "@/lib/studio/sharp-suggestions";
@@ -10,7 +12,7 @@ import { createStretchEstimator } from "@/lib/studio/stretch-estimate";
 import { stretchLimitOf, suggestDarts } from "@/lib/studio/dart-suggestions";
 import { pendingSuggestions } from "@/lib/studio/suggestion";
 import { buildStudioMesh } from "@/lib/studio/studio-mesh";
-import { chainPairs, ring, seamFlags } from "./fixtures";
+import { chainPairs, ring, seamFlags, transformed } from "./fixtures";
 
 describe("sharp ridge and valley suggestions", () => {
   it("a cube with a 30° threshold suggests its 12 edges as ridges, one run per edge", () => {
@@ -128,5 +130,46 @@ describe("dart suggestions from the stretch estimate", () => {
     expect(Number.isNaN(est[0].estimatedStretch)).toBe(true);
     expect(suggestDarts(sm, est, eva)).toEqual([]);
     expect(stretchLimitOf("no-such-foam")).toBe(0.02);
+  });
+
+  it("the estimate tracks the flattening's real stretch on spherical caps (30° and 60°)", () => {
+    const B = 24, S = 48;
+    const mesh = uvSphere({ radius: 1, latitudeBands: B, longitudeSegments: S });
+    const sm = buildStudioMesh(mesh);
+    const estimator = createStretchEstimator(sm);
+    for (const k of [4, 8]) {
+      const pairs = chainPairs(ring(S, k));
+      const flags = seamFlags(sm, pairs);
+      const est = estimator.estimate(computeLivePieces(sm, flags), flags)[0];
+      // Source: flattenPiece (LSCM + length-preserving refinement) on the same cap: its measured max stretch
+      const flat = flattenPiece(cutPieces(mesh, new Uint32Array(pairs.flat()))[0]);
+      const ratio = est.estimatedStretch / flat.metrics.maxStretch;
+      expect(ratio).toBeGreaterThan(0.9);
+      expect(ratio).toBeLessThan(1.5);
+      // Source: Bertrand–Diguet–Puiseux on a unit sphere, ε = θ²/6 for a cap of polar angle θ (the mesh is a bit flatter)
+      const theta = (Math.PI * k) / B;
+      expect(est.estimatedStretch).toBeLessThan((theta * theta) / 6);
+      expect(est.estimatedStretch).toBeGreaterThan(0.8 * ((theta * theta) / 6));
+    }
+  });
+
+  it("the estimate and the dart do not change when the mesh is scaled by 1e±6 and moved", () => {
+    const base = uvSphere({ radius: 1, latitudeBands: 12, longitudeSegments: 24 });
+    const pairs = chainPairs(ring(24, 6));
+    const run = (mesh: typeof base) => {
+      const sm = buildStudioMesh(mesh);
+      const flags = seamFlags(sm, pairs);
+      const est = createStretchEstimator(sm).estimate(computeLivePieces(sm, flags), flags);
+      const unit = Math.hypot(...mesh.positions.subarray(0, 3).map((x, k) => x - mesh.positions[3 * (mesh.positions.length / 3 - 1) + k])) / 2;
+      // the tip and the dart length; which of the equally short meridians the dart takes may differ by rounding
+      return { est: est.map((e) => e.estimatedStretch), darts: suggestDarts(sm, est, eva).map((d) => [d.vertices[d.vertices.length - 1], d.length / unit]).sort((a, b) => a[0] - b[0]) };
+    };
+    const ref = run(base);
+    for (const s of [1e-6, 1e6]) {
+      const got = run(transformed(base, s, 5 * s, 0, -3 * s));
+      got.est.forEach((x, i) => expect(x).toBeCloseTo(ref.est[i], 9));
+      expect(got.darts.map((d) => d[0])).toEqual(ref.darts.map((d) => d[0]));
+      got.darts.forEach((d, i) => expect(d[1]).toBeCloseTo(ref.darts[i][1], 9));
+    }
   });
 });

@@ -10,6 +10,11 @@ import { buildStudioMesh } from "@/lib/studio/studio-mesh";
 import { createSeamPathFinder } from "@/lib/studio/seam-path";
 import { createLivePiecesComputer, explainPiece } from "@/lib/studio/live-pieces";
 import { SeamSet } from "@/lib/studio/seam-set";
+import { cube } from "@/lib/geometry/shapes/cube";
+import { suggestSharpSeams } from "@/lib/studio/sharp-suggestions";
+import { createStretchEstimator } from "@/lib/studio/stretch-estimate";
+import { suggestDarts } from "@/lib/studio/dart-suggestions";
+import { mirrorRuns, mirrorVertices } from "@/lib/studio/mirror-map";
 
 function median(xs: number[]): number {
   const s = [...xs].sort((a, b) => a - b);
@@ -51,6 +56,14 @@ function run(name: string, mesh: TriMesh, far: [number, number][]): void {
     ms.push(t);
   }
   console.log(`  live pieces (${set.seamEdgeCount} seam edges → ${live.count} pieces, disks ${Array.from(live.isDisk).join("")}): median ${median(ms).toFixed(1)} ms, max ${Math.max(...ms).toFixed(1)} ms`);
+  const [sharp, sharpMs] = time(() => suggestSharpSeams(sm, { thresholdDeg: 30, onSeam: set.onSeam }));
+  const [estimator, estBuildMs] = time(() => createStretchEstimator(sm));
+  const [est, estMs] = time(() => estimator.estimate(live, set.onSeam));
+  const darts = suggestDarts(sm, est, 0.05);
+  console.log(`  suggestions: sharp chains ${sharpMs.toFixed(1)} ms (${sharp.length}); stretch estimate ${estMs.toFixed(1)} ms (+ ${estBuildMs.toFixed(1)} ms once per mesh), ${darts.length} dart(s)`);
+  const [mirror, mirrorMs] = time(() => mirrorVertices(sm, { axis: "x" }));
+  const [mr, mrMs] = time(() => mirrorRuns(sm, mirror, set.runs));
+  console.log(`  mirror: partners ${mirrorMs.toFixed(1)} ms (${mirror.unmatched} unmatched), runs ${mrMs.toFixed(1)} ms (${mr.mirrored} edges mirrored, ${mr.failed} not)`);
   const nonDisk = Array.from(live.isDisk).findIndex((d) => d === 0);
   if (nonDisk >= 0) {
     const [, t] = time(() => explainPiece(sm, live, nonDisk));
@@ -65,3 +78,10 @@ run("UV sphere", sphere, [[0, sphere.positions.length / 3 - 1], [ringV(125, 0), 
 const grid = flatGrid({ faces: 200_000, size: 1000, bump: 60 });
 const m = Math.round(Math.sqrt(100_000)) + 1;
 run("bumped grid", grid, [[0, m * m - 1], [m - 1, m * (m - 1)], [Math.floor(m / 2), m * m - 1 - Math.floor(m / 2)]]);
+const n = 129; // 6·2·129² = 199 692 faces
+const box = cube({ size: 100, subdivisions: n });
+const corner = (x: number, y: number, z: number): number => {
+  for (let v = 0; v < box.positions.length / 3; v++) if (box.positions[3 * v] === x && box.positions[3 * v + 1] === y && box.positions[3 * v + 2] === z) return v;
+  throw new Error("no corner");
+};
+run("subdivided cube (sharp edges)", box, [[corner(-50, -50, -50), corner(50, 50, 50)], [corner(-50, -50, 50), corner(50, 50, 50)], [corner(50, -50, -50), corner(-50, 50, 50)]]);
