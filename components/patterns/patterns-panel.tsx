@@ -4,6 +4,7 @@ import { Panel } from "@/components/ui/panel";
 import { errorMessage } from "@/lib/client/api-fetch";
 import { formatTimestamp } from "@/lib/client/format";
 import { usePatterns } from "@/components/scans/use-scan-queries";
+import { findFoamMaterial } from "@/lib/patterns/materials";
 
 const REVIEW_LABEL = { pending: "awaiting review", approved: "approved", changes_requested: "changes requested" } as const;
 
@@ -19,7 +20,7 @@ export function PatternsPanel({ projectId }: { projectId: string }) {
           <li key={p.id} className="flex flex-col gap-1 border-b border-kraft-200 py-3 last:border-b-0">
             <div className="flex flex-wrap items-baseline justify-between gap-2 text-sm">
               <span>
-                {p.pieceCount} piece{p.pieceCount === 1 ? "" : "s"}, {p.params.material}, {p.params.thicknessMm} mm
+                {p.pieceCount} piece{p.pieceCount === 1 ? "" : "s"}, {findFoamMaterial(p.params.material)?.name ?? p.params.material}, {p.params.thicknessMm} mm
                 {p.seamMapVersion ? `, seams v${p.seamMapVersion}` : ""}
               </span>
               <span className="text-xs uppercase tracking-wider text-kraft-700">{p.status === "ready" ? REVIEW_LABEL[p.reviewStatus] : p.status}</span>
