@@ -1,11 +1,15 @@
 /**
- * Seam path finder: the shortest chain of mesh edges between two picked vertices, A* search (Hart, Nilsson &
- * Raphael 1968, "A Formal Basis for the Heuristic Determination of Minimum Cost Paths") with the straight-line
- * distance to the target as heuristic, on a binary heap over typed arrays.
+ * Seam path finder: the shortest chain of mesh edges between two picked vertices. Bidirectional A* search with
+ * the average potential π(v) = (|v − t| − |v − s|)/2 (Ikeda et al. 1994, "A fast algorithm for finding better routes
+ * by AI search techniques"; Goldberg & Harrelson 2005, "Computing the shortest path: A* search meets graph theory",
+ * §4): both searches run Dijkstra on the same reduced edge costs c − π(v) + π(w) ≥ 0 and stop when the sum of their
+ * smallest keys reaches the best path found, which is then exact. Searching from both ends halves the area settled
+ * where the straight-line distance is a poor guide (across a sphere, or with snapping on); binary heaps over typed
+ * arrays.
  *
- * Edge cost = 3D edge length, or length × `sharpFactor` on a sharp edge when snapping to sharp edges. The heuristic
- * is the straight-line distance × min(1, sharpFactor), a lower bound of every path's cost, so A* stays exact
- * (admissible and consistent heuristic). Scratch arrays are allocated once per finder and reset with a generation
+ * Edge cost = 3D edge length, or length × `sharpFactor` on a sharp edge when snapping to sharp edges. The
+ * straight-line distances in π are scaled by sharpFactor when some edge is sharp, so they stay lower bounds of every
+ * path's cost (consistent heuristics, hence exact). Scratch arrays are allocated once per finder and reset with a generation
  * stamp, so a query touches only the vertices it visits.
  */
 import type { StudioMesh } from "./studio-mesh";
@@ -51,11 +55,12 @@ export function createSeamPathFinder(sm: StudioMesh): SeamPathFinder {
   const nv = sm.vertexCount;
   const p = sm.mesh.positions;
   const { vertexEdgeOffsets: off, vertexNeighbors: nbr, vertexEdges: ved, edgeLength, dihedral } = sm;
-  const g = new Float64Array(nv);
-  const predEdge = new Int32Array(nv);
-  const stamp = new Uint32Array(nv); // visited in generation `gen`
-  const done = new Uint32Array(nv); // settled in generation `gen`
-  const heap = new MinHeap(2 * sm.edgeCount + 2);
+  // forward (from the start) and reverse (from the end) labels: distance, predecessor edge, generation stamps
+  const gF = new Float64Array(nv), gR = new Float64Array(nv);
+  const predF = new Int32Array(nv), predR = new Int32Array(nv);
+  const stampF = new Uint32Array(nv), stampR = new Uint32Array(nv); // labelled in generation `gen`
+  const doneF = new Uint32Array(nv), doneR = new Uint32Array(nv); // settled in generation `gen`
+  const heapF = new MinHeap(2 * sm.edgeCount + 2), heapR = new MinHeap(2 * sm.edgeCount + 2);
   const edgeCost = new Float64Array(sm.edgeCount);
   let costKey = ""; // options the edgeCost array was filled for
   let sharpCount = 0; // sharp edges under those options
@@ -90,45 +95,73 @@ export function createSeamPathFinder(sm: StudioMesh): SeamPathFinder {
     checkVertex(to, "End");
     const hScale = prepareCosts(opts);
     if (from === to) return { vertices: Uint32Array.of(from), edges: new Uint32Array(0), length: 0, settled: 0 };
-    if (++gen === 0xffffffff) { stamp.fill(0); done.fill(0); gen = 1; }
+    if (++gen === 0xffffffff) { stampF.fill(0); stampR.fill(0); doneF.fill(0); doneR.fill(0); gen = 1; }
+    const sx = p[3 * from], sy = p[3 * from + 1], sz = p[3 * from + 2];
     const tx = p[3 * to], ty = p[3 * to + 1], tz = p[3 * to + 2];
-    heap.clear();
-    g[from] = 0; predEdge[from] = -1; stamp[from] = gen;
-    heap.push(0, from);
+    /** forward potential π(v) = (|v − t| − |v − s|)/2 × scale; the reverse search uses −π */
+    const pot = (w: number): number => {
+      const ax = p[3 * w] - tx, ay = p[3 * w + 1] - ty, az = p[3 * w + 2] - tz;
+      const bx = p[3 * w] - sx, by = p[3 * w + 1] - sy, bz = p[3 * w + 2] - sz;
+      return 0.5 * hScale * (Math.sqrt(ax * ax + ay * ay + az * az) - Math.sqrt(bx * bx + by * by + bz * bz));
+    };
+    heapF.clear(); heapR.clear();
+    gF[from] = 0; predF[from] = -1; stampF[from] = gen; heapF.push(pot(from), from);
+    gR[to] = 0; predR[to] = -1; stampR[to] = gen; heapR.push(-pot(to), to);
+    let best = Infinity, meetV = -1, meetW = -1, meetE = -1; // best s–t path found: s … v –e– w … t
     let settled = 0;
-    let reached = false;
-    while (heap.size > 0) {
+    while (heapF.size > 0 && heapR.size > 0) {
+      if (heapF.topKey() + heapR.topKey() >= best) break;
+      const forward = heapF.size <= heapR.size;
+      const heap = forward ? heapF : heapR;
+      const g = forward ? gF : gR, pred = forward ? predF : predR, stamp = forward ? stampF : stampR, done = forward ? doneF : doneR;
+      const gO = forward ? gR : gF, stampO = forward ? stampR : stampF;
+      const sign = forward ? 1 : -1;
       const v = heap.pop();
       if (done[v] === gen) continue;
       done[v] = gen;
       settled++;
-      if (v === to) { reached = true; break; }
       const gv = g[v];
       for (let q = off[v], end = off[v + 1]; q < end; q++) {
         const w = nbr[q];
-        if (done[w] === gen) continue;
         const e = ved[q];
         const d = gv + edgeCost[e];
+        // every scanned edge whose far end the other search has labelled closes an s–t path
+        if (stampO[w] === gen && d + gO[w] < best) {
+          best = d + gO[w];
+          if (forward) { meetV = v; meetW = w; } else { meetV = w; meetW = v; }
+          meetE = e;
+        }
+        if (done[w] === gen) continue;
         if (stamp[w] !== gen || d < g[w]) {
-          stamp[w] = gen; g[w] = d; predEdge[w] = e;
-          const dx = p[3 * w] - tx, dy = p[3 * w + 1] - ty, dz = p[3 * w + 2] - tz;
-          heap.push(d + hScale * Math.sqrt(dx * dx + dy * dy + dz * dz), w);
+          stamp[w] = gen; g[w] = d; pred[w] = e;
+          heap.push(d + sign * pot(w), w);
         }
       }
     }
-    if (!reached) return null;
-    let n = 0;
-    for (let v = to; v !== from; n++) { const e = predEdge[v]; v = sm.edgeLo[e] === v ? sm.edgeHi[e] : sm.edgeLo[e]; }
+    if (meetE < 0) return null;
+    // s … meetV (forward labels), meetV –meetE– meetW, meetW … t (reverse labels)
+    let nf = 0, nr = 0;
+    for (let v = meetV; v !== from; nf++) { const e = predF[v]; v = sm.edgeLo[e] === v ? sm.edgeHi[e] : sm.edgeLo[e]; }
+    for (let v = meetW; v !== to; nr++) { const e = predR[v]; v = sm.edgeLo[e] === v ? sm.edgeHi[e] : sm.edgeLo[e]; }
+    const n = nf + 1 + nr;
     const vertices = new Uint32Array(n + 1), edges = new Uint32Array(n);
-    let length = 0;
-    vertices[n] = to;
-    for (let i = n - 1, v = to; i >= 0; i--) {
-      const e = predEdge[v];
+    vertices[nf] = meetV;
+    for (let i = nf - 1, v = meetV; i >= 0; i--) {
+      const e = predF[v];
       edges[i] = e;
-      length += edgeLength[e];
       v = sm.edgeLo[e] === v ? sm.edgeHi[e] : sm.edgeLo[e];
       vertices[i] = v;
     }
+    edges[nf] = meetE;
+    vertices[nf + 1] = meetW;
+    for (let i = nf + 1, v = meetW; v !== to; i++) {
+      const e = predR[v];
+      edges[i] = e;
+      v = sm.edgeLo[e] === v ? sm.edgeHi[e] : sm.edgeLo[e];
+      vertices[i + 1] = v;
+    }
+    let length = 0;
+    for (let i = 0; i < n; i++) length += edgeLength[edges[i]];
     return { vertices, edges, length, settled };
   };
 

@@ -6,6 +6,7 @@ import { flatGrid } from "@/lib/geometry/shapes/flat-grid";
 import { uvSphere } from "@/lib/geometry/shapes/uv-sphere";
 import { cutPieces } from "@/lib/geometry/topology/cut-pieces";
 import { computeLivePieces, explainPiece } from "@/lib/studio/live-pieces";
+import { pieceOutlineEdges } from "@/lib/studio/piece-outline";
 import { buildStudioMesh, edgeBetween } from "@/lib/studio/studio-mesh";
 import { chainPairs, meridian, ring, seamFlags } from "./fixtures";
 
@@ -76,5 +77,20 @@ describe("disk detection", () => {
     expect([t.eulerCharacteristic[0], t.boundaryLoops[0], t.isDisk[0]]).toEqual([0, 2, 0]);
     expect(explainPiece(tube, t, 0).problem).toMatch(/^two boundary loops/);
     expect(edgeBetween(tube, 0, 8)).toBeGreaterThanOrEqual(0);
+  });
+});
+
+describe("piece outline", () => {
+  it("a hemisphere's outline is its equator; an open tube's are its two rims", () => {
+    const B = 8, S = 12;
+    const sm = buildStudioMesh(uvSphere({ radius: 1, latitudeBands: B, longitudeSegments: S }));
+    const flags = seamFlags(sm, chainPairs(ring(S, B / 2)));
+    const live = computeLivePieces(sm, flags);
+    const equator = Array.from(flags).flatMap((f, e) => (f ? [e] : []));
+    expect(Array.from(pieceOutlineEdges(sm, live, flags, 0))).toEqual(equator);
+    expect(Array.from(pieceOutlineEdges(sm, live, flags, 1))).toEqual(equator);
+    const tube = buildStudioMesh(cylinderTube({ radius: 1, height: 1, segments: 8, bands: 2 }));
+    const none = new Uint8Array(tube.edgeCount);
+    expect(pieceOutlineEdges(tube, computeLivePieces(tube, none), none, 0).length).toBe(16);
   });
 });

@@ -34,18 +34,23 @@ function run(name: string, mesh: TriMesh, far: [number, number][]): void {
   console.log(`  adjacency (edges, CSR, lengths, dihedrals): ${buildMs.toFixed(1)} ms, ${sm.edgeCount} edges`);
   const finder = createSeamPathFinder(sm);
   const set = new SeamSet(sm);
-  for (const snap of [false, true]) {
-    const ms: number[] = [];
-    let settled = 0;
-    for (let rep = 0; rep < 5; rep++) {
-      for (const [a, b] of far) {
-        const [path, t] = time(() => finder.find(a, b, { snapToSharp: snap }));
-        ms.push(t);
-        settled = Math.max(settled, path?.settled ?? 0);
-        if (rep === 0 && !snap) set.addRun(path!.vertices);
+  let seed = 12345;
+  const rnd = () => ((seed = (seed * 1103515245 + 12345) % 2147483648) / 2147483648);
+  const random: [number, number][] = Array.from({ length: 20 }, () => [Math.floor(rnd() * sm.vertexCount), Math.floor(rnd() * sm.vertexCount)]);
+  for (const [what, pairs] of [["far apart (opposite ends: the worst case)", far], ["random pairs", random]] as const) {
+    for (const snap of [false, true]) {
+      const ms: number[] = [];
+      let settled = 0;
+      for (let rep = 0; rep < 3; rep++) {
+        for (const [a, b] of pairs) {
+          const [path, t] = time(() => finder.find(a, b, { snapToSharp: snap }));
+          ms.push(t);
+          settled = Math.max(settled, path?.settled ?? 0);
+          if (rep === 0 && !snap && pairs === far) set.addRun(path!.vertices);
+        }
       }
+      console.log(`  seam path, ${what}${snap ? ", snap to sharp" : ""}: median ${median(ms).toFixed(1)} ms, max ${Math.max(...ms).toFixed(1)} ms (${ms.length} queries, up to ${settled} vertices settled)`);
     }
-    console.log(`  seam path across the mesh${snap ? " (snap to sharp)" : ""}: median ${median(ms).toFixed(1)} ms, max ${Math.max(...ms).toFixed(1)} ms (${ms.length} queries, up to ${settled} vertices settled)`);
   }
   const computer = createLivePiecesComputer(sm);
   const ms: number[] = [];
