@@ -23,8 +23,8 @@ export interface HermitianFactor {
   perm: Uint32Array;
   lp: Uint32Array;
   li: Uint32Array;
-  lr: Float64Array;
-  lim: Float64Array;
+  /** L entries interleaved (re, im) per stored position: one stream instead of two in the factor and solve loops */
+  lz: Float64Array;
   d: Float64Array;
   nnzL: number;
 }
@@ -71,11 +71,10 @@ export function factorHermitian(h: HermitianCsr, perm?: Uint32Array): HermitianF
   for (let k = 0; k < n; k++) lp[k + 1] = lp[k] + lnz[k];
   const nnzL = lp[n];
   const li = new Uint32Array(nnzL);
-  const lr = new Float64Array(nnzL);
-  const lim = new Float64Array(nnzL);
+  const lz = new Float64Array(2 * nnzL);
   const d = new Float64Array(n);
-  const yr = new Float64Array(n);
-  const yi = new Float64Array(n);
+  // accumulator of row k, interleaved (re, im) like lz
+  const y = new Float64Array(2 * n);
   const pattern = new Int32Array(n);
   const colComplex = new Uint8Array(n);
   let maxDiag = 0;
@@ -85,43 +84,43 @@ export function factorHermitian(h: HermitianCsr, perm?: Uint32Array): HermitianF
     lnz[k] = 0;
     for (let q = cp[k]; q < cp[k + 1]; q++) {
       let i = ci[q];
-      yr[i] += cr[q];
-      yi[i] += cim[q];
+      y[2 * i] += cr[q];
+      y[2 * i + 1] += cim[q];
       let len = 0;
       for (; flag[i] !== k; i = parent[i]) { pattern[len++] = i; flag[i] = k; }
       while (len > 0) pattern[--top] = pattern[--len];
     }
-    let dk = yr[k];
+    let dk = y[2 * k];
     if (dk > maxDiag) maxDiag = dk;
-    yr[k] = 0; yi[k] = 0;
+    y[2 * k] = 0; y[2 * k + 1] = 0;
     for (; top < n; top++) {
       const i = pattern[top];
-      const wr = yr[i], wi = yi[i];
-      yr[i] = 0; yi[i] = 0;
+      const wr = y[2 * i], wi = y[2 * i + 1];
+      y[2 * i] = 0; y[2 * i + 1] = 0;
       const p2 = lp[i] + lnz[i];
       if (colComplex[i] === 0) {
         // column i of L is real so far (most columns below the boundary-free parts of the tree): cheaper update
         if (wi === 0) {
-          for (let q = lp[i]; q < p2; q++) yr[li[q]] -= lr[q] * wr;
+          for (let q = lp[i]; q < p2; q++) y[2 * li[q]] -= lz[2 * q] * wr;
         } else {
           for (let q = lp[i]; q < p2; q++) {
-            const r = li[q], ar = lr[q];
-            yr[r] -= ar * wr;
-            yi[r] -= ar * wi;
+            const r = 2 * li[q], ar = lz[2 * q];
+            y[r] -= ar * wr;
+            y[r + 1] -= ar * wi;
           }
         }
       } else {
         for (let q = lp[i]; q < p2; q++) {
-          const r = li[q], ar = lr[q], ai = lim[q];
-          yr[r] -= ar * wr - ai * wi;
-          yi[r] -= ar * wi + ai * wr;
+          const r = 2 * li[q], ar = lz[2 * q], ai = lz[2 * q + 1];
+          y[r] -= ar * wr - ai * wi;
+          y[r + 1] -= ar * wi + ai * wr;
         }
       }
       const di = d[i];
       // L_ki = conj(w_i) / D_i; D_k −= |w_i|² / D_i
       li[p2] = k;
-      lr[p2] = wr / di;
-      lim[p2] = -wi / di;
+      lz[2 * p2] = wr / di;
+      lz[2 * p2 + 1] = -wi / di;
       if (wi !== 0) colComplex[i] = 1;
       dk -= (wr * wr + wi * wi) / di;
       lnz[i]++;
@@ -131,19 +130,19 @@ export function factorHermitian(h: HermitianCsr, perm?: Uint32Array): HermitianF
     }
     d[k] = dk;
   }
-  return { n, perm: p, lp, li, lr, lim, d, nnzL };
+  return { n, perm: p, lp, li, lz, d, nnzL };
 }
 
 /** Solves H·z = b (complex, split in real/imaginary arrays). `work` has length 2n. b and z may alias. */
 export function solveHermitian(
   f: HermitianFactor, br: Float64Array, bi: Float64Array, zr: Float64Array, zi: Float64Array, work: Float64Array,
 ): void {
-  const { n, perm, lp, li, lr, lim, d } = f;
+  const { n, perm, lp, li, lz, d } = f;
   for (let i = 0; i < n; i++) { work[2 * i] = br[perm[i]]; work[2 * i + 1] = bi[perm[i]]; }
   for (let j = 0; j < n; j++) {
     const wr = work[2 * j], wi = work[2 * j + 1];
     for (let q = lp[j]; q < lp[j + 1]; q++) {
-      const r = 2 * li[q], ar = lr[q], ai = lim[q];
+      const r = 2 * li[q], ar = lz[2 * q], ai = lz[2 * q + 1];
       work[r] -= ar * wr - ai * wi;
       work[r + 1] -= ar * wi + ai * wr;
     }
@@ -152,7 +151,7 @@ export function solveHermitian(
   for (let j = n - 1; j >= 0; j--) {
     let sr = work[2 * j], si = work[2 * j + 1];
     for (let q = lp[j]; q < lp[j + 1]; q++) {
-      const r = 2 * li[q], ar = lr[q], ai = lim[q];
+      const r = 2 * li[q], ar = lz[2 * q], ai = lz[2 * q + 1];
       const xr = work[r], xi = work[r + 1];
       // conj(L_rj)·z_r
       sr -= ar * xr + ai * xi;
