@@ -39,7 +39,7 @@ export function createPiecesHandler(post: PostResponse, defer: Defer = (t) => se
   let sm: StudioMesh | null = null;
   let computer: LivePiecesComputer | null = null;
   let estimator: StretchEstimator | null = null;
-  let latest = -1;
+  let latestPieces = -1;
   let cached: { onSeam: Uint8Array; live: LivePieces } | null = null;
 
   const livePieces = (onSeam: Uint8Array): LivePieces => {
@@ -65,20 +65,23 @@ export function createPiecesHandler(post: PostResponse, defer: Defer = (t) => se
         return;
       }
       if (!sm || !computer) throw new Error("Send the mesh before asking for pieces.");
-      latest = Math.max(latest, req.requestId);
       if (req.type === "pieces") {
+        latestPieces = Math.max(latestPieces, req.requestId);
         const t = performance.now();
         const live = livePieces(req.onSeam);
-        const { cornerClass: _kept, ...rest } = live;
-        void _kept;
-        const pieces: LivePiecesSummary = { ...rest, facePiece: live.facePiece.slice(), pieceFaces: live.pieceFaces.slice() };
+        const pieces: LivePiecesSummary = {
+          count: live.count, labels: live.labels, facePiece: live.facePiece.slice(), pieceFaceStart: live.pieceFaceStart.slice(),
+          pieceFaces: live.pieceFaces.slice(), vertices: live.vertices.slice(), edges: live.edges.slice(),
+          boundaryLoops: live.boundaryLoops.slice(), eulerCharacteristic: live.eulerCharacteristic.slice(), genus: live.genus.slice(),
+          isDisk: live.isDisk.slice(), method: live.method,
+        };
         post({ type: "pieces", requestId: req.requestId, pieces, ms: performance.now() - t }, [pieces.facePiece.buffer, pieces.pieceFaces.buffer]);
         if (req.explain === false) return;
         const mesh = sm;
         const todo = Array.from(live.isDisk).flatMap((d, p) => (d ? [] : [p]));
         const next = () => {
           const p = todo.shift();
-          if (p === undefined || req.requestId !== latest) return;
+          if (p === undefined || req.requestId !== latestPieces) return;
           try {
             const t0 = performance.now();
             const topology = explainPiece(mesh, live, p);

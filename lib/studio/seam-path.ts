@@ -1,11 +1,12 @@
 /**
  * Seam path finder: the shortest chain of mesh edges between two picked vertices. Bidirectional A* search with
  * the average potential π(v) = (|v − t| − |v − s|)/2 (Ikeda et al. 1994, "A fast algorithm for finding better routes
- * by AI search techniques"; Goldberg & Harrelson 2005, "Computing the shortest path: A* search meets graph theory",
- * §4): both searches run Dijkstra on the same reduced edge costs c − π(v) + π(w) ≥ 0 and stop when the sum of their
- * smallest keys reaches the best path found, which is then exact. Searching from both ends halves the area settled
- * where the straight-line distance is a poor guide (across a sphere, or with snapping on); binary heaps over typed
- * arrays.
+ * by AI search techniques"; Goldberg & Harrelson 2005, "Computing the shortest path: A* search meets graph theory"):
+ * both searches run Dijkstra on the same reduced edge costs c − π(v) + π(w) ≥ 0 and stop when the sum of their
+ * smallest keys reaches the best path found, which is then exact. Measured on 200k-face meshes
+ * (tests/studio/time-studio.ts) it settles fewer vertices than one-sided A* when snapping (about 30k instead of 38k
+ * corner to corner on a cube); between opposite points of a sphere any search settles nearly the whole mesh, since
+ * every direction is almost as short. Binary heaps over typed arrays.
  *
  * Edge cost = 3D edge length, or length × `sharpFactor` on a sharp edge when snapping to sharp edges. The
  * straight-line distances in π are scaled by sharpFactor when some edge is sharp, so they stay lower bounds of every

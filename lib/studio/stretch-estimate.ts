@@ -6,8 +6,8 @@
  * 2π − Σ corner angles (Source: Meyer, Desbrun, Schröder & Barr, "Discrete Differential-Geometry Operators for
  * Triangulated 2-Manifolds", VisMath 2002; lib/geometry/analysis/angle-defect.ts). How much stretch that curvature
  * forces grows with the size of the region it sits in: a geodesic disc of radius r on a surface of curvature K has
- * circumference C = 2πr(1 − K r²/6 + O(r⁴)) (Source: Bertrand–Diguet–Puiseux theorem, 1848; e.g. M. do Carmo,
- * "Differential Geometry of Curves and Surfaces", §4-6 exercise), so laying the largest disc around a vertex v flat
+ * circumference C = 2πr(1 − K r²/6 + O(r⁴)) (Source: Bertrand–Diguet–Puiseux theorem, 1848:
+ * K = lim_{r→0} 3(2πr − C(r))/(π r³)), so laying the largest disc around a vertex v flat
  * with its radius kept changes the rim length by the fraction
  *
  *     ε(v) = |K(v)| · d(v)² / 6,

@@ -59,3 +59,19 @@ describe("pieces worker protocol", () => {
     expect(m.estimates.map((e) => e.label)).toEqual(["A", "B"]);
   });
 });
+
+describe("pieces worker protocol: kinds of request", () => {
+  it("a suggestion request does not cancel the explanations of the latest pieces request", () => {
+    const B = 8, S = 12;
+    const mesh = uvSphere({ radius: 1, latitudeBands: B, longitudeSegments: S });
+    const out: PiecesResponse[] = [];
+    const tasks: (() => void)[] = [];
+    const handle = createPiecesHandler((m) => out.push(m), (t) => tasks.push(t));
+    handle({ type: "mesh", positions: mesh.positions, triangles: mesh.triangles });
+    const sm = buildStudioMesh(mesh);
+    handle({ type: "pieces", requestId: 1, onSeam: new Uint8Array(sm.edgeCount) });
+    handle({ type: "suggest", requestId: 2, onSeam: new Uint8Array(sm.edgeCount), thresholdDeg: 40, stretchLimit: 0.05 });
+    while (tasks.length) tasks.shift()!();
+    expect(out.filter((m) => m.type === "explanation").map((m) => (m.type === "explanation" ? m.topology.problem : ""))).toEqual([expect.stringMatching(/^closed surface/)]);
+  });
+});
