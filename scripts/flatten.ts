@@ -3,6 +3,7 @@
  *   npm run flatten -- MESH [--seams SEAMS.json] [--units mm|cm|m|in] [--out-units mm|cm|m|in]
  *     [--scale F | --target-width LEN [--target-axis x|y|z|largest]] [--thickness LEN --scan-face outer|inner] [--k K]
  *     [--tick-spacing LEN] [--mirror AXIS[=OFFSET]] [--face-budget N] [--json OUT.json | --json -]
+ *     [--pdf OUT.pdf [--paper letter|a4|a3|tabloid|full]] [--svg OUT.svg] [--material ID]
  *
  * Prints a short summary (stderr when the JSON goes to stdout) and writes the full FlattenReport with timing.
  * Exit 0 for a valid mesh (pieces that cannot be flattened are only reported), 2 for bad arguments, 1 for a file that
@@ -17,6 +18,10 @@ import { readMesh } from "@/lib/geometry/intake/read-mesh";
 import { parseSeamsJson, resolveSeams } from "@/lib/geometry/seams/parse-seams";
 import { flattenMesh, type PipelineReport } from "@/lib/geometry/pipeline/flatten-mesh";
 import { parseFlattenOptions, type FlattenOptionsInput } from "@/lib/geometry/pipeline/flatten-options";
+import { MM_PER_UNIT } from "@/lib/geometry/mesh";
+import { renderPatternPdf, renderPatternSvg } from "@/lib/patterns";
+import { PAPER_IDS, type PaperId } from "@/lib/patterns/paper-sizes";
+import { patternDocumentInput } from "@/lib/patterns-store/document-input";
 
 class UsageError extends Error {}
 
@@ -40,9 +45,17 @@ const argsSchema = z
     mirror: z.string().regex(/^[xyz](=[+-]?(\d+(\.\d*)?|\.\d+)(e[+-]?\d+)?)?$/i, "--mirror must be x, y or z, optionally =OFFSET (e.g. x=0)").optional(),
     "face-budget": numberText("--face-budget").pipe(z.number().int("--face-budget must be a whole number").positive()).optional(),
     json: z.string().min(1).optional(),
+    pdf: z.string().min(1).optional(),
+    svg: z.string().min(1).optional(),
+    paper: z.enum(PAPER_IDS as unknown as [PaperId, ...PaperId[]], { message: `expected one of ${PAPER_IDS.join(", ")}` }).optional(),
+    material: z.string().trim().min(1).max(80).optional(),
   })
   .refine((a) => !(a.scale !== undefined && a["target-width"] !== undefined), { message: "use either --scale or --target-width, not both" })
-  .refine((a) => a["scan-face"] === undefined || a.thickness !== undefined, { message: "--scan-face needs --thickness" });
+  .refine((a) => a["scan-face"] === undefined || a.thickness !== undefined, { message: "--scan-face needs --thickness" })
+  .refine((a) => a.paper === undefined || a.pdf !== undefined, { message: "--paper needs --pdf" })
+  .refine((a) => (a.pdf === undefined && a.svg === undefined) || a.thickness !== undefined, {
+    message: "--pdf and --svg need --thickness (the foam thickness is printed on the pattern)",
+  });
 
 type CliArgs = z.output<typeof argsSchema>;
 
@@ -67,6 +80,10 @@ function parseCli(argv: string[]): CliArgs {
         mirror: { type: "string" },
         "face-budget": { type: "string" },
         json: { type: "string" },
+        pdf: { type: "string" },
+        svg: { type: "string" },
+        paper: { type: "string" },
+        material: { type: "string" },
         help: { type: "boolean", short: "h" },
       },
     });
@@ -91,7 +108,8 @@ function parseCli(argv: string[]): CliArgs {
 
 const USAGE =
   "usage: npm run flatten -- MESH [--seams SEAMS.json] [--units mm|cm|m|in] [--out-units U] [--scale F | --target-width LEN] " +
-  "[--thickness LEN --scan-face outer|inner] [--k K] [--tick-spacing LEN] [--mirror x=0] [--face-budget N] [--json OUT.json|-]";
+  "[--thickness LEN --scan-face outer|inner] [--k K] [--tick-spacing LEN] [--mirror x=0] [--face-budget N] [--json OUT.json|-] " +
+  "[--pdf OUT.pdf [--paper letter|a4|a3|tabloid|full]] [--svg OUT.svg] [--material eva|eva-hd|craft-foam|upholstery-foam|pe-foam]";
 
 async function readInput(path: string, what: string): Promise<Buffer> {
   try {
@@ -180,7 +198,35 @@ async function main(): Promise<number> {
       }
     }
   }
+  if (args.pdf || args.svg) {
+    // the same documents the worker stores for a pattern (lib/patterns via patternDocumentInput)
+    const name = args.mesh.replace(/^.*[\\/]/, "");
+    const input = patternDocumentInput(report, result.facePiece, intake.mesh, {
+      projectName: name.replace(/\.[^.]+$/, ""),
+      scanName: name,
+      material: args.material ?? "eva",
+      thicknessMm: report.surface.thickness * MM_PER_UNIT[report.units],
+      createdAt: new Date(),
+    });
+    const out = toStdout ? process.stderr : process.stdout;
+    if (args.pdf) {
+      await writeOutput(args.pdf, await renderPatternPdf(input, { paper: args.paper ?? "letter" }));
+      out.write(`wrote ${args.pdf}\n`);
+    }
+    if (args.svg) {
+      await writeOutput(args.svg, renderPatternSvg(input));
+      out.write(`wrote ${args.svg}\n`);
+    }
+  }
   return 0;
+}
+
+async function writeOutput(file: string, data: string | Uint8Array): Promise<void> {
+  try {
+    await writeFile(file, data);
+  } catch (e) {
+    throw new InputError(`Cannot write ${file}: ${(e as NodeJS.ErrnoException).code ?? (e as Error).message}.`);
+  }
 }
 
 main().then(
