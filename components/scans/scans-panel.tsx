@@ -4,7 +4,7 @@ import { Panel } from "@/components/ui/panel";
 import { errorMessage } from "@/lib/client/api-fetch";
 import type { ScanDto } from "@/lib/scans/scans";
 import { FlattenForm } from "./flatten-form";
-import { ScanUploadForm } from "./scan-upload-form";
+import { ScanDropzone } from "@/components/upload/scan-dropzone";
 import { useScans } from "./use-scan-queries";
 
 const STATUS_STYLE: Record<ScanDto["status"], string> = {
@@ -34,7 +34,7 @@ function ScanRow({ scan, projectId, canFlatten }: { scan: ScanDto; projectId: st
   );
 }
 
-/** The project's scans with their status, the upload form and a flatten form per ready scan (per role). */
+/** The project's scans with their status, the upload dropzone and a flatten form per ready scan (per role). */
 export function ScansPanel({ projectId, canUpload, canFlatten }: { projectId: string; canUpload: boolean; canFlatten: boolean }) {
   const scans = useScans(projectId);
   return (
@@ -48,7 +48,7 @@ export function ScansPanel({ projectId, canUpload, canFlatten }: { projectId: st
           ))}
         </ul>
       ) : null}
-      {canUpload ? <ScanUploadForm projectId={projectId} /> : null}
+      {canUpload ? <ScanDropzone projectId={projectId} /> : null}
     </Panel>
   );
 }

@@ -1,7 +1,7 @@
 "use client";
 
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
-import { ApiError, apiFetch } from "@/lib/client/api-fetch";
+import { apiFetch } from "@/lib/client/api-fetch";
 import type { ScanDto } from "@/lib/scans/scans";
 import type { JobStatusDto } from "@/lib/jobs/job-status";
 import type { PatternSummaryDto } from "@/lib/patterns-store/pattern-dto";
@@ -28,28 +28,6 @@ export function usePatterns(projectId: string) {
     queryKey: scanKeys.patterns(projectId),
     queryFn: async ({ signal }) => (await apiFetch<{ patterns: PatternSummaryDto[] }>(`/api/projects/${encodeURIComponent(projectId)}/patterns`, { signal })).patterns,
     refetchInterval: (q) => (q.state.data?.some((p) => p.status === "queued" || p.status === "processing") ? 3_000 : false),
-  });
-}
-
-/** Uploads a file as multipart/form-data (the JSON helper cannot send files). */
-export function useUploadScan(projectId: string) {
-  const client = useQueryClient();
-  return useMutation({
-    mutationFn: async ({ file, units }: { file: File; units: string }) => {
-      const form = new FormData();
-      form.append("units", units);
-      form.append("file", file, file.name);
-      let res: Response;
-      try {
-        res = await fetch(`/api/projects/${encodeURIComponent(projectId)}/scans`, { method: "POST", body: form, credentials: "same-origin" });
-      } catch {
-        throw new ApiError(0, "NETWORK", "Could not reach the server. Check your connection and try again.");
-      }
-      const body = (await res.json().catch(() => null)) as (ScanDto & { error?: { code: string; message: string } }) | null;
-      if (!res.ok) throw new ApiError(res.status, body?.error?.code ?? `HTTP_${res.status}`, body?.error?.message ?? `The server answered ${res.status}.`);
-      return body as ScanDto;
-    },
-    onSuccess: () => client.invalidateQueries({ queryKey: scanKeys.scans(projectId) }),
   });
 }
 
