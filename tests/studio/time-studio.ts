@@ -63,9 +63,16 @@ function run(name: string, mesh: TriMesh, far: [number, number][]): void {
   console.log(`  live pieces (${set.seamEdgeCount} seam edges → ${live.count} pieces, disks ${Array.from(live.isDisk).join("")}): median ${median(ms).toFixed(1)} ms, max ${Math.max(...ms).toFixed(1)} ms`);
   const [sharp, sharpMs] = time(() => suggestSharpSeams(sm, { thresholdDeg: 30, onSeam: set.onSeam }));
   const [estimator, estBuildMs] = time(() => createStretchEstimator(sm));
-  const [est, estMs] = time(() => estimator.estimate(live, set.onSeam));
+  const estTimes: number[] = [];
+  let est = estimator.estimate(live, set.onSeam);
+  for (let rep = 0; rep < 5; rep++) {
+    const [e, t] = time(() => estimator.estimate(live, set.onSeam));
+    est = e;
+    estTimes.push(t);
+  }
+  const estMs = median(estTimes);
   const darts = suggestDarts(sm, est, 0.05);
-  console.log(`  suggestions: sharp chains ${sharpMs.toFixed(1)} ms (${sharp.length}); stretch estimate ${estMs.toFixed(1)} ms (+ ${estBuildMs.toFixed(1)} ms once per mesh), ${darts.length} dart(s)`);
+  console.log(`  suggestions: sharp chains ${sharpMs.toFixed(1)} ms (${sharp.length}); stretch estimate median ${estMs.toFixed(1)} ms, max ${Math.max(...estTimes).toFixed(1)} ms (+ ${estBuildMs.toFixed(1)} ms once per mesh), ${darts.length} dart(s)`);
   const [mirror, mirrorMs] = time(() => mirrorVertices(sm, { axis: "x" }));
   const [mr, mrMs] = time(() => mirrorRuns(sm, mirror, set.runs));
   console.log(`  mirror: partners ${mirrorMs.toFixed(1)} ms (${mirror.unmatched} unmatched), runs ${mrMs.toFixed(1)} ms (${mr.mirrored} edges mirrored, ${mr.failed} not)`);
