@@ -100,7 +100,8 @@ export function countFlips(triangles: Uint32Array, uv: Float64Array): number {
  * Parameterization", SGP), energy E = ½ Σ_t Σ_(i,j)∈t ½cot θ_ij ‖(u_i − u_j) − R_t(x_i − x_j)‖².
  * Local step: R_t = the rotation closest to the cotan-weighted covariance S_t (for 2×2, angle
  * atan2(S21 − S12, S11 + S22); always a proper rotation, never a reflection). Global step: L·u = b with the
- * cotan Laplacian, one vertex pinned, factorised once (nested dissection + LDLᵀ) and solved for u and v together.
+ * cotan Laplacian, one vertex pinned, factorised once (nested dissection + LDLᵀ; flattenPiece starts that factor
+ * on a helper thread before LSCM, see `prepared`) and solved for u and v together.
  * Flip guard: a step that increases the number of flipped triangles is halved up to 6 times toward the previous
  * iterate; if it still flips, refinement stops at the previous iterate (so the result never has more flipped
  * triangles than the LSCM start). solver.residual is the final energy divided by the 3D area (scale-free).
