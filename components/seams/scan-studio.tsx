@@ -123,8 +123,9 @@ function Workbench({ scan, mesh, canEdit, canFlatten, initialVersions }: { scan:
 
   const [material, setMaterial] = useState("eva");
   const [suggestions, setSuggestions] = useState<SeamSuggestion[]>([]);
+  // suggestions wait for the recount, so they never hold up the pieces answer in the worker's queue
   useEffect(() => {
-    if (!work) return;
+    if (!work || !pieces) return;
     let live = true;
     const timer = window.setTimeout(() => {
       work.suggestions(set.onSeam, threshold, stretchLimitOf(material)).then(
@@ -133,7 +134,7 @@ function Workbench({ scan, mesh, canEdit, canFlatten, initialVersions }: { scan:
       );
     }, 150);
     return () => { live = false; window.clearTimeout(timer); };
-  }, [work, set, revision, threshold, material]);
+  }, [work, set, pieces, threshold, material]);
   const decision = useCallback((id: string) => set.decision(id), [set, revision]); // eslint-disable-line react-hooks/exhaustive-deps
 
   const finishRun = useCallback(() => { setAnchor(null); setRunOpen(false); }, []);

@@ -39,32 +39,36 @@ function mainThreadWork(sm: StudioMesh): StudioWork {
 }
 
 /**
- * The pieces worker of lib/studio for this mesh (live pieces, explanations, suggestions off the main thread), or
- * null while it starts. Falls back to the same code on the main thread if the worker cannot start.
+ * Two pieces workers of lib/studio for this mesh, one for live pieces and explanations, one for suggestions (off
+ * the main thread), or null while they start. Falls back to the same code on the main thread if the worker cannot start.
  */
 export function useStudioWork(mesh: TriMesh, sm: StudioMesh): StudioWork | null {
   const [work, setWork] = useState<StudioWork | null>(null);
   useEffect(() => {
     let cancelled = false;
     let client: PiecesClient | null = null;
+    let suggester: PiecesClient | null = null;
     try {
       client = createPiecesClient(mesh);
+      // a second worker for suggestions: the stretch estimate on a large scan takes a while, and the live pieces
+      // must never queue behind it
+      suggester = createPiecesClient(mesh);
     } catch (err) {
       console.warn("[peelform viewer] pieces worker unavailable, counting on the main thread:", err);
     }
-    if (!client) { setWork(mainThreadWork(sm)); return; }
-    const c = client;
-    c.ready.then(
+    if (!client || !suggester) { client?.dispose(); setWork(mainThreadWork(sm)); return; }
+    const c = client, sc = suggester;
+    Promise.all([c.ready, sc.ready]).then(([r]) => r).then(
       (r) => {
         console.debug(`[peelform viewer] pieces worker ready in ${r.ms.toFixed(1)} ms (${r.faceCount} faces)`);
-        if (!cancelled) setWork({ where: "worker", pieces: (s) => c.pieces(s), suggestions: (s, t, l) => c.suggestions(s, t, l), onExplanation: (l) => c.onExplanation(l) });
+        if (!cancelled) setWork({ where: "worker", pieces: (s) => c.pieces(s), suggestions: (s, t, l) => sc.suggestions(s, t, l), onExplanation: (l) => c.onExplanation(l) });
       },
       (err: unknown) => {
         console.warn("[peelform viewer] pieces worker failed, counting on the main thread:", err);
         if (!cancelled) setWork(mainThreadWork(sm));
       },
     );
-    return () => { cancelled = true; c.dispose(); setWork(null); };
+    return () => { cancelled = true; c.dispose(); sc.dispose(); setWork(null); };
   }, [mesh, sm]);
   return work;
 }

@@ -7,25 +7,32 @@ import { LineSegmentsGeometry } from "three/examples/jsm/lines/LineSegmentsGeome
 
 /**
  * Thick screen-space line segments over the surface.
+ * A new geometry is made for every change: the renderer caches the instance count of an instanced geometry, so
+ * refilling the old one with more segments would still draw only the first ones.
  * @param positions 6 per segment (start xyz, end xyz), scan units
  * @param width line width in CSS pixels
  */
 export function FatSegments({ positions, color, width, dashed = false, onTop = false }: { positions: Float32Array; color: string; width: number; dashed?: boolean; onTop?: boolean }) {
+  const material = useMemo(
+    () => new LineMaterial({ color, linewidth: width, dashed, dashSize: 3, gapSize: 2, depthTest: !onTop, transparent: onTop }),
+    [color, width, dashed, onTop],
+  );
   const line = useMemo(() => {
-    const geometry = new LineSegmentsGeometry();
-    const material = new LineMaterial({ color, linewidth: width, dashed, dashSize: 3, gapSize: 2, depthTest: !onTop, transparent: onTop });
-    const obj = new LineSegments2(geometry, material);
+    const obj = new LineSegments2(new LineSegmentsGeometry(), material);
     obj.renderOrder = onTop ? 10 : 2;
     obj.frustumCulled = false;
     return obj;
-  }, [color, width, dashed, onTop]);
+  }, [material, onTop]);
   useEffect(() => {
-    if (positions.length >= 6) {
-      line.geometry.setPositions(positions);
-      if (dashed) line.computeLineDistances();
-    }
+    const old = line.geometry;
+    const g = new LineSegmentsGeometry();
+    if (positions.length >= 6) g.setPositions(positions);
+    line.geometry = g;
+    if (dashed && positions.length >= 6) line.computeLineDistances();
     line.visible = positions.length >= 6;
+    old.dispose();
   }, [line, positions, dashed]);
-  useEffect(() => () => { line.geometry.dispose(); line.material.dispose(); }, [line]);
+  useEffect(() => () => { line.geometry.dispose(); }, [line]);
+  useEffect(() => () => material.dispose(), [material]);
   return <primitive object={line} />;
 }

@@ -146,6 +146,13 @@ function TagProjector({ tags, bvh, layer, radius }: { tags: PieceTag[]; bvh: Mes
   return null;
 }
 
+/** Asks for a frame after every render of the viewer (the canvas draws on demand, not 60 times a second). */
+function Invalidator() {
+  const invalidate = useThree((st) => st.invalidate);
+  useEffect(() => { invalidate(); });
+  return null;
+}
+
 function MirrorPlane({ mirror, frame }: { mirror: NonNullable<ScanViewerProps["mirror"]>; frame: Frame }) {
   const size = new THREE.Vector3();
   frame.box.getSize(size);
@@ -181,6 +188,7 @@ export function ScanViewer(props: ScanViewerProps) {
       camera={{ fov: 40, position: [0, 0, 10] }}
       gl={{ antialias: true, preserveDrawingBuffer: true }}
       dpr={[1, 2]}
+      frameloop="demand"
       style={{ touchAction: "none" }}
     >
       <color attach="background" args={["#f3ede2"]} />
@@ -208,6 +216,7 @@ export function ScanViewer(props: ScanViewerProps) {
       {mirror ? <MirrorPlane mirror={mirror} frame={frame} /> : null}
       <OrbitControls makeDefault enableDamping={false} />
       <Fitter frame={frame} fitKey={fitKey} />
+      <Invalidator />
       <Picker geometry={geometry} bvh={bvh} triangles={mesh.triangles} enabled={picking} onPick={onPick} />
     </Canvas>
       <div ref={tagLayer} className="pointer-events-none absolute inset-0 overflow-hidden" aria-hidden="true">
