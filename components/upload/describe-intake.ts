@@ -2,7 +2,7 @@ import type { MeshReport } from "@/lib/geometry/report-types";
 
 const n = (x: number) => x.toLocaleString("en-GB");
 const plural = (x: number, one: string, many: string) => `${n(x)} ${x === 1 ? one : many}`;
-const FORMAT = { obj: "OBJ", "stl-ascii": "text STL", "stl-binary": "binary STL" } as const;
+const FORMAT = { obj: "an OBJ", "stl-ascii": "a text STL", "stl-binary": "a binary STL" } as const;
 
 export interface IntakeLine {
   text: string;
@@ -15,7 +15,7 @@ export function describeIntake(r: MeshReport): IntakeLine[] {
   const lines: IntakeLine[] = [];
   const [sx, sy, sz] = r.bbox.size;
   const round = (v: number) => (Math.round(v * 10) / 10).toLocaleString("en-GB");
-  lines.push({ tone: "ok", text: `Read ${plural(r.inputVertices, "vertex", "vertices")} and ${plural(r.inputFaces, "face", "faces")} from a ${FORMAT[r.format]} file; the working mesh has ${plural(r.vertices, "vertex", "vertices")} and ${plural(r.faces, "face", "faces")}.` });
+  lines.push({ tone: "ok", text: `Read ${plural(r.inputVertices, "vertex", "vertices")} and ${plural(r.inputFaces, "face", "faces")} from ${FORMAT[r.format]} file; the working mesh has ${plural(r.vertices, "vertex", "vertices")} and ${plural(r.faces, "face", "faces")}.` });
   lines.push({ tone: "ok", text: `Size ${round(sx)} × ${round(sy)} × ${round(sz)} ${r.units}.` });
   const cleaned: string[] = [];
   if (r.weldedVertices) cleaned.push(`joined ${plural(r.weldedVertices, "duplicate vertex", "duplicate vertices")}`);
